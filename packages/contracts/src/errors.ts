@@ -1,0 +1,70 @@
+import { z } from "zod";
+
+/** Every error code the API answers with. The HTTP status for each is in `errorStatus`. */
+export const errorCodes = [
+  "invalid-request", // 400: body, query or path failed validation; details.issues name the fields
+  "unauthenticated", // 401: no valid session
+  "invalid-credentials", // 401: wrong e-mail or password at sign-in / password change
+  "csrf", // 403: state-changing request from another origin
+  "forbidden", // 403: a member whose role does not allow this
+  "not-found", // 404: no such thing, or not a member of its project
+  "email-taken", // 409: sign-up with an e-mail that already has an account
+  "already-member", // 409
+  "last-owner", // 409: the last owner cannot be removed or demoted
+  "version-conflict", // 409: baseVersion is not the latest; details.current is the latest revision
+  "already-checked", // 409: a checked revision is immutable
+  "too-large", // 413 for bodies over the byte limit, 422 for models over the size limits
+  "invalid-model", // 422: the solver rejected the model; details.where names the path
+  "mechanism", // 422: the beam cannot carry load
+  "rate-limited", // 429
+  "internal", // 500
+  "database-unavailable", // 503
+] as const;
+export const errorCodeSchema = z.enum(errorCodes);
+export type ErrorCode = z.infer<typeof errorCodeSchema>;
+
+export const errorStatus: Record<ErrorCode, number> = {
+  "invalid-request": 400,
+  unauthenticated: 401,
+  "invalid-credentials": 401,
+  csrf: 403,
+  forbidden: 403,
+  "not-found": 404,
+  "email-taken": 409,
+  "already-member": 409,
+  "last-owner": 409,
+  "version-conflict": 409,
+  "already-checked": 409,
+  "too-large": 422,
+  "invalid-model": 422,
+  mechanism: 422,
+  "rate-limited": 429,
+  internal: 500,
+  "database-unavailable": 503,
+};
+
+export const validationIssueSchema = z.object({
+  /** Dotted path of the offending field, e.g. `model.segments.2.I` or `email`. */
+  path: z.string(),
+  message: z.string(),
+});
+export type ValidationIssue = z.infer<typeof validationIssueSchema>;
+
+/** The one error body: `{ error: { code, message, details } }`. */
+export const errorBodySchema = z.object({
+  error: z.object({
+    code: errorCodeSchema,
+    message: z.string(),
+    details: z.record(z.string(), z.unknown()).optional(),
+  }),
+});
+export type ErrorBody = z.infer<typeof errorBodySchema>;
+
+/** Size limits of the API (the solver library itself has none). Over them: `too-large`. */
+export const apiLimits = {
+  bodyBytes: 1_000_000,
+  nodes: 1000,
+  loadCases: 50,
+  loadsPerCase: 500,
+  combinations: 50,
+} as const;
