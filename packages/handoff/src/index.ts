@@ -1,0 +1,3 @@
+export * from "./exchange.js";
+export * from "./units.js";
+export * from "./reactionTable.js";
