@@ -7,3 +7,4 @@ export * from "./editions.js";
 export * from "./result.js";
 export * from "./usUnits.js";
 export * from "./sections/index.js";
+export * from "./materials/index.js";

@@ -1,0 +1,3 @@
+export * from "./material.js";
+export * from "./materialPresets.js";
+export * from "./concreteModulus.js";
