@@ -1,0 +1,73 @@
+import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import {
+  meResponseSchema,
+  routePath,
+  type SignInRequest,
+  type SignUpRequest,
+  type User,
+} from "@spanwright/contracts";
+import { isApiError, request } from "./client";
+import { queryKeys } from "./queryKeys";
+
+/** The signed-in user, or null when there is no session (401 is an answer here, not an error). */
+export async function fetchMe(signal?: AbortSignal): Promise<User | null> {
+  try {
+    const body = await request(routePath("me"), { signal, parse: (d) => meResponseSchema.parse(d) });
+    return body.user;
+  } catch (error) {
+    if (isApiError(error) && error.status === 401) return null;
+    throw error;
+  }
+}
+
+export function useMe() {
+  return useQuery({
+    queryKey: queryKeys.me,
+    queryFn: ({ signal }) => fetchMe(signal),
+    staleTime: 60_000,
+  });
+}
+
+export function useSignIn() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (input: SignInRequest) =>
+      request(routePath("signIn"), {
+        method: "POST",
+        body: input,
+        parse: (d) => meResponseSchema.parse(d),
+      }),
+    onSuccess: (body) => {
+      // A different user may sign in on the same tab: drop everything cached for the last one.
+      queryClient.removeQueries({ predicate: (q) => q.queryKey[0] !== "me" });
+      queryClient.setQueryData(queryKeys.me, body.user);
+    },
+  });
+}
+
+export function useSignUp() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (input: SignUpRequest) =>
+      request(routePath("signUp"), {
+        method: "POST",
+        body: input,
+        parse: (d) => meResponseSchema.parse(d),
+      }),
+    onSuccess: (body) => {
+      queryClient.removeQueries({ predicate: (q) => q.queryKey[0] !== "me" });
+      queryClient.setQueryData(queryKeys.me, body.user);
+    },
+  });
+}
+
+export function useSignOut() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: () => request(routePath("signOut"), { method: "POST" }),
+    onSuccess: () => {
+      queryClient.clear();
+      queryClient.setQueryData(queryKeys.me, null);
+    },
+  });
+}

@@ -1,0 +1,63 @@
+import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import {
+  beamListResponseSchema,
+  beamResponseSchema,
+  routePath,
+  type BeamResponse,
+  type CreateBeamRequest,
+} from "@spanwright/contracts";
+import { request } from "./client";
+import { queryKeys } from "./queryKeys";
+
+export function useBeams(projectId: string) {
+  return useQuery({
+    queryKey: queryKeys.beams(projectId),
+    queryFn: async ({ signal }) => {
+      const body = await request(routePath("listBeams", { projectId }), {
+        signal,
+        parse: (d) => beamListResponseSchema.parse(d),
+      });
+      return body.beams;
+    },
+  });
+}
+
+/** The beam with its latest revision (model and result). */
+export function useBeam(projectId: string, beamId: string) {
+  return useQuery({
+    queryKey: queryKeys.beam(projectId, beamId),
+    queryFn: ({ signal }) =>
+      request(routePath("getBeam", { projectId, beamId }), {
+        signal,
+        parse: (d) => beamResponseSchema.parse(d),
+      }),
+  });
+}
+
+export function useCreateBeam(projectId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (input: CreateBeamRequest): Promise<BeamResponse> =>
+      request(routePath("createBeam", { projectId }), {
+        method: "POST",
+        body: input,
+        parse: (d) => beamResponseSchema.parse(d),
+      }),
+    onSuccess: (created) => {
+      queryClient.setQueryData(queryKeys.beam(projectId, created.beam.id), created);
+      void queryClient.invalidateQueries({ queryKey: queryKeys.beams(projectId), exact: true });
+    },
+  });
+}
+
+export function useDeleteBeam(projectId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (beamId: string) =>
+      request(routePath("deleteBeam", { projectId, beamId }), { method: "DELETE" }),
+    onSuccess: (_data, beamId) => {
+      queryClient.removeQueries({ queryKey: queryKeys.beam(projectId, beamId) });
+      void queryClient.invalidateQueries({ queryKey: queryKeys.beams(projectId), exact: true });
+    },
+  });
+}

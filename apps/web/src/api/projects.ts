@@ -1,0 +1,84 @@
+import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import {
+  projectListResponseSchema,
+  projectResponseSchema,
+  routePath,
+  type CreateProjectRequest,
+  type Project,
+  type UpdateProjectRequest,
+} from "@spanwright/contracts";
+import { request } from "./client";
+import { queryKeys } from "./queryKeys";
+
+export function useProjects() {
+  return useQuery({
+    queryKey: queryKeys.projects,
+    queryFn: async ({ signal }) => {
+      const body = await request(routePath("listProjects"), {
+        signal,
+        parse: (d) => projectListResponseSchema.parse(d),
+      });
+      return body.projects;
+    },
+  });
+}
+
+export function useProject(projectId: string) {
+  return useQuery({
+    queryKey: queryKeys.project(projectId),
+    queryFn: async ({ signal }) => {
+      const body = await request(routePath("getProject", { projectId }), {
+        signal,
+        parse: (d) => projectResponseSchema.parse(d),
+      });
+      return body.project;
+    },
+  });
+}
+
+export function useCreateProject() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: async (input: CreateProjectRequest): Promise<Project> => {
+      const body = await request(routePath("createProject"), {
+        method: "POST",
+        body: input,
+        parse: (d) => projectResponseSchema.parse(d),
+      });
+      return body.project;
+    },
+    onSuccess: (project) => {
+      queryClient.setQueryData(queryKeys.project(project.id), project);
+      void queryClient.invalidateQueries({ queryKey: queryKeys.projects, exact: true });
+    },
+  });
+}
+
+export function useUpdateProject(projectId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: async (input: UpdateProjectRequest): Promise<Project> => {
+      const body = await request(routePath("updateProject", { projectId }), {
+        method: "PATCH",
+        body: input,
+        parse: (d) => projectResponseSchema.parse(d),
+      });
+      return body.project;
+    },
+    onSuccess: (project) => {
+      queryClient.setQueryData(queryKeys.project(projectId), project);
+      void queryClient.invalidateQueries({ queryKey: queryKeys.projects, exact: true });
+    },
+  });
+}
+
+export function useDeleteProject(projectId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: () => request(routePath("deleteProject", { projectId }), { method: "DELETE" }),
+    onSuccess: () => {
+      queryClient.removeQueries({ queryKey: queryKeys.project(projectId) });
+      void queryClient.invalidateQueries({ queryKey: queryKeys.projects, exact: true });
+    },
+  });
+}

@@ -1,0 +1,56 @@
+import { createBrowserRouter, Navigate, Outlet, type RouteObject } from "react-router";
+import { FullPageLoading } from "./components/FullPageLoading";
+import { RequireAuth } from "./components/RequireAuth";
+import { RouteErrorPage } from "./pages/RouteErrorPage";
+
+/*
+ * Every page is its own chunk (route `lazy`), so the sign-in page never downloads the editor,
+ * Konva or the solver. Only the shell (header, guard, query client) is in the entry chunk.
+ */
+export const routes: RouteObject[] = [
+  {
+    element: <Outlet />,
+    HydrateFallback: FullPageLoading,
+    errorElement: <RouteErrorPage />,
+    children: [
+      {
+        path: "sign-in",
+        lazy: async () => ({ Component: (await import("./pages/auth/SignInPage")).SignInPage }),
+      },
+      {
+        path: "sign-up",
+        lazy: async () => ({ Component: (await import("./pages/auth/SignUpPage")).SignUpPage }),
+      },
+      {
+        element: <RequireAuth />,
+        children: [
+          { index: true, element: <Navigate to="/projects" replace /> },
+          {
+            path: "projects",
+            lazy: async () => ({ Component: (await import("./pages/projects/ProjectsPage")).ProjectsPage }),
+          },
+          {
+            path: "projects/:projectId",
+            lazy: async () => ({ Component: (await import("./pages/project/ProjectPage")).ProjectPage }),
+          },
+          {
+            path: "projects/:projectId/members",
+            lazy: async () => ({ Component: (await import("./pages/members/MembersPage")).MembersPage }),
+          },
+          {
+            path: "projects/:projectId/beams/:beamId",
+            lazy: async () => ({ Component: (await import("./editor/BeamEditorPage")).BeamEditorPage }),
+          },
+          {
+            path: "*",
+            lazy: async () => ({ Component: (await import("./pages/NotFoundPage")).NotFoundPage }),
+          },
+        ],
+      },
+    ],
+  },
+];
+
+export function createAppRouter() {
+  return createBrowserRouter(routes);
+}
