@@ -157,7 +157,7 @@ function readCsv(text: string): Parsed {
       skip_empty_lines: true,
       relax_column_count: true,
       info: true,
-    }) as Array<{ record: string[]; info: { lines: number } }>;
+    }) as unknown as Array<{ record: string[]; info: { lines: number } }>;
     return { ok: true, records };
   } catch (error) {
     const line = typeof (error as { lines?: unknown }).lines === "number" ? (error as { lines: number }).lines : 0;
