@@ -8,3 +8,4 @@ export * from "./result.js";
 export * from "./usUnits.js";
 export * from "./sections/index.js";
 export * from "./materials/index.js";
+export * from "./combinations/index.js";
