@@ -55,6 +55,8 @@ export const errorBodySchema = z.object({
   error: z.object({
     code: errorCodeSchema,
     message: z.string(),
+    /** For solver errors (`invalid-model`, `mechanism`, `too-large`): the model path, as in the exchange format. */
+    where: z.string().optional(),
     details: z.record(z.string(), z.unknown()).optional(),
   }),
 });

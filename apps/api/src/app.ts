@@ -1,0 +1,136 @@
+import cookieParser from "cookie-parser";
+import express, { type Express, type RequestHandler, Router } from "express";
+import { rateLimit } from "express-rate-limit";
+import helmet from "helmet";
+import { randomUUID } from "node:crypto";
+import fs from "node:fs";
+import path from "node:path";
+import { pino, type Logger } from "pino";
+import { pinoHttp } from "pino-http";
+import { apiLimits } from "@spanwright/contracts";
+import { registerAuthRoutes } from "./auth/auth.routes.js";
+import { createAuthService } from "./auth/auth.service.js";
+import { loadSession } from "./auth/sessionCookie.js";
+import { registerBeamRoutes } from "./beams/beams.routes.js";
+import { createBeamsService } from "./beams/beams.service.js";
+import { systemClock, type Clock } from "./clock.js";
+import type { Config } from "./config.js";
+import type { Database } from "./db/client.js";
+import { registerHealthRoutes } from "./health/health.routes.js";
+import { AppError } from "./http/appError.js";
+import { checkOrigin } from "./http/csrf.js";
+import { apiNotFound, errorHandler } from "./http/errorHandler.js";
+import { registerMemberRoutes } from "./members/members.routes.js";
+import { createMembersService } from "./members/members.service.js";
+import { registerProjectRoutes } from "./projects/projects.routes.js";
+import { createProjectsService } from "./projects/projects.service.js";
+import { registerRevisionRoutes } from "./revisions/revisions.routes.js";
+import { createRevisionsService } from "./revisions/revisions.service.js";
+import type { Engine } from "./solve/engine.js";
+import { registerSolveRoutes } from "./solve/solve.routes.js";
+
+export interface AppDeps {
+  config: Config;
+  database: Database;
+  engine: Engine;
+  clock?: Clock;
+  logger?: Logger;
+}
+
+export function createServices(deps: { database: Database; engine: Engine; clock: Clock }) {
+  const { database, engine, clock } = deps;
+  const db = database.db;
+  const auth = createAuthService({ db, clock });
+  const beams = createBeamsService({ db, clock, engine });
+  return {
+    auth,
+    projects: createProjectsService({ db, clock }),
+    members: createMembersService({ db }),
+    beams,
+    revisions: createRevisionsService({ db, clock, engine, beams }),
+  };
+}
+
+export type Services = ReturnType<typeof createServices>;
+
+function authRateLimiter(config: Config): RequestHandler {
+  return rateLimit({
+    windowMs: config.authRateWindowMs,
+    limit: config.authRateLimit,
+    standardHeaders: "draft-8",
+    legacyHeaders: false,
+    handler: (_req, _res, next) => next(new AppError("rate-limited", "too many attempts; wait a few minutes and try again")),
+  });
+}
+
+/** Every `/api` route, on one router with full paths (the route-table test walks it). */
+function createApiRouter(deps: AppDeps, services: Services): Router {
+  const { config, database } = deps;
+  const router = Router();
+  registerHealthRoutes(router, () => database.ping());
+  router.use("/api", loadSession(services.auth, config.sessionCookieName));
+  registerAuthRoutes(router, {
+    auth: services.auth,
+    cookieName: config.sessionCookieName,
+    authRateLimit: authRateLimiter(config),
+  });
+  registerSolveRoutes(router, deps.engine);
+  registerProjectRoutes(router, services.projects);
+  registerMemberRoutes(router, services.members);
+  registerBeamRoutes(router, services.beams);
+  registerRevisionRoutes(router, services.revisions);
+  return router;
+}
+
+/** The built web app with a fallback to index.html for client-side routes (GET outside /api). */
+function serveWebApp(app: Express, distDir: string): void {
+  const indexHtml = path.join(distDir, "index.html");
+  app.use(express.static(distDir, { index: false, maxAge: "1h" }));
+  app.use((req, res, next) => {
+    if ((req.method !== "GET" && req.method !== "HEAD") || req.path === "/api" || req.path.startsWith("/api/")) return next();
+    if (!fs.existsSync(indexHtml)) return next();
+    res.sendFile(indexHtml);
+  });
+}
+
+/** The Express app, without listening: tests drive it through supertest. */
+export function createApp(deps: AppDeps): { app: Express; services: Services; apiRouter: Router } {
+  const { config } = deps;
+  const clock = deps.clock ?? systemClock;
+  const logger = deps.logger ?? pino({ level: config.logLevel });
+  const services = createServices({ database: deps.database, engine: deps.engine, clock });
+
+  const app = express();
+  app.disable("x-powered-by");
+  app.set("trust proxy", config.trustProxy);
+  app.use(helmet());
+  app.use(
+    pinoHttp({
+      logger,
+      genReqId: (req, res) => {
+        const incoming = req.headers["x-request-id"];
+        const id = typeof incoming === "string" && /^[\w-]{1,64}$/.test(incoming) ? incoming : randomUUID();
+        res.setHeader("X-Request-Id", id);
+        return id;
+      },
+      // method, path and status only: never headers (cookies) or bodies (passwords)
+      serializers: {
+        req: (req: { id: unknown; method: string; url: string }) => ({ id: req.id, method: req.method, url: req.url.split("?")[0] }),
+        res: (res: { statusCode: number }) => ({ statusCode: res.statusCode }),
+      },
+    }),
+  );
+
+  const apiRouter = createApiRouter(deps, services);
+  app.use(
+    "/api",
+    cookieParser(),
+    checkOrigin({ allowedOrigins: config.allowedOrigins, sessionCookieName: config.sessionCookieName }),
+    express.json({ limit: apiLimits.bodyBytes }),
+  );
+  app.use(apiRouter);
+  app.use("/api", apiNotFound);
+  if (config.serveWeb) serveWebApp(app, config.webDistDir);
+  app.use(errorHandler);
+  return { app, services, apiRouter };
+}

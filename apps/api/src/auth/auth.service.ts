@@ -1,0 +1,120 @@
+import type { ChangePasswordRequest, SignInRequest, SignUpRequest, User } from "@spanwright/contracts";
+import type { Clock } from "../clock.js";
+import { inTransaction, type Db } from "../db/client.js";
+import { recordAudit } from "../audit/audit.repo.js";
+import { AppError } from "../http/appError.js";
+import { isUniqueViolation } from "../http/dbErrors.js";
+import * as repo from "./auth.repo.js";
+import { burnPasswordCheck, hashPassword, verifyPassword } from "./password.js";
+import { generateSessionToken, sessionExpiry, sessionIdFromToken, sessionState } from "./sessionToken.js";
+
+export interface IssuedSession {
+  /** The cookie value; only its hash is stored. */
+  token: string;
+  sessionId: string;
+  expiresAt: Date;
+}
+
+export interface Authenticated {
+  user: User;
+  sessionId: string;
+  /** Set when the expiry slid forward and the cookie must be sent again. */
+  renewedUntil: Date | null;
+}
+
+const toUser = (u: repo.UserRecord): User => ({ id: u.id, email: u.email, name: u.name });
+
+export function createAuthService(deps: { db: Db; clock: Clock }) {
+  const { db, clock } = deps;
+
+  async function issueSession(userId: string, tx: Db = db): Promise<IssuedSession> {
+    const token = generateSessionToken();
+    const sessionId = sessionIdFromToken(token);
+    const expiresAt = sessionExpiry(clock.now());
+    await repo.insertSession(tx, { id: sessionId, userId, expiresAt });
+    return { token, sessionId, expiresAt };
+  }
+
+  return {
+    issueSession,
+
+    /** Creates the account, or completes a placeholder an invitation created for this e-mail. */
+    async signUp(input: SignUpRequest): Promise<{ user: User; session: IssuedSession }> {
+      const passwordHash = await hashPassword(input.password);
+      try {
+        return await inTransaction(db, async (tx) => {
+          const existing = await repo.findUserByEmail(tx, input.email);
+          let user: repo.UserRecord | null;
+          if (existing) {
+            user = existing.passwordHash === null
+              ? await repo.claimPlaceholderUser(tx, existing.id, { name: input.name, passwordHash })
+              : null;
+            if (!user) throw new AppError("email-taken", "an account with this e-mail already exists");
+          } else {
+            user = await repo.insertUser(tx, { email: input.email, name: input.name, passwordHash });
+          }
+          await recordAudit(tx, { projectId: null, actorId: user.id, action: "user.signed-up" });
+          return { user: toUser(user), session: await issueSession(user.id, tx) };
+        });
+      } catch (error) {
+        if (isUniqueViolation(error, "users_email_key")) {
+          throw new AppError("email-taken", "an account with this e-mail already exists");
+        }
+        throw error;
+      }
+    },
+
+    /** Checks the password and starts a new session; the presented one (if any) is ended (rotation). */
+    async signIn(input: SignInRequest, presentedToken: string | null): Promise<{ user: User; session: IssuedSession }> {
+      const found = await repo.findUserByEmail(db, input.email);
+      if (!found?.passwordHash) {
+        await burnPasswordCheck(input.password);
+        throw new AppError("invalid-credentials", "wrong e-mail or password");
+      }
+      if (!(await verifyPassword(found.passwordHash, input.password))) {
+        throw new AppError("invalid-credentials", "wrong e-mail or password");
+      }
+      if (presentedToken) await repo.deleteSession(db, sessionIdFromToken(presentedToken));
+      return { user: toUser(found), session: await issueSession(found.id) };
+    },
+
+    async signOut(token: string): Promise<void> {
+      await repo.deleteSession(db, sessionIdFromToken(token));
+    },
+
+    /** The user behind a cookie, sliding the expiry when due; null when unknown or expired. */
+    async authenticate(token: string): Promise<Authenticated | null> {
+      const sessionId = sessionIdFromToken(token);
+      const found = await repo.findSessionWithUser(db, sessionId);
+      if (!found) return null;
+      const now = clock.now();
+      const state = sessionState(found.session.expiresAt, now);
+      if (state === "expired") {
+        await repo.deleteSession(db, sessionId);
+        return null;
+      }
+      let renewedUntil: Date | null = null;
+      if (state === "renew") {
+        renewedUntil = sessionExpiry(now);
+        await repo.updateSessionExpiry(db, sessionId, renewedUntil);
+      }
+      return { user: toUser(found.user), sessionId, renewedUntil };
+    },
+
+    /** Changes the password and ends every other session of the user (a stolen cookie stops working). */
+    async changePassword(userId: string, sessionId: string, input: ChangePasswordRequest): Promise<void> {
+      const user = await repo.findUserById(db, userId);
+      if (!user?.passwordHash || !(await verifyPassword(user.passwordHash, input.currentPassword))) {
+        throw new AppError("invalid-credentials", "the current password is wrong");
+      }
+      const passwordHash = await hashPassword(input.newPassword);
+      await inTransaction(db, async (tx) => {
+        await repo.updatePasswordHash(tx, userId, passwordHash);
+        await repo.deleteOtherSessions(tx, userId, sessionId);
+        await recordAudit(tx, { projectId: null, actorId: userId, action: "user.password-changed" });
+      });
+    },
+  };
+}
+
+export type AuthService = ReturnType<typeof createAuthService>;

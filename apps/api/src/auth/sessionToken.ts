@@ -1,0 +1,31 @@
+import { sha256 } from "@oslojs/crypto/sha2";
+import { encodeBase32LowerCaseNoPadding, encodeHexLowerCase } from "@oslojs/encoding";
+import { randomBytes } from "node:crypto";
+
+const day = 24 * 60 * 60 * 1000;
+/** A session lives 30 days from its last renewal. */
+export const sessionLifetimeMs = 30 * day;
+/** Renew (slide the expiry) once less than half the lifetime is left, so active users stay signed in. */
+export const sessionRenewWithinMs = 15 * day;
+
+/** 160 random bits, base32: the value of the cookie. Never stored. */
+export function generateSessionToken(): string {
+  return encodeBase32LowerCaseNoPadding(randomBytes(20));
+}
+
+/** The session id stored in the database: hex SHA-256 of the token, so a leaked table grants nothing. */
+export function sessionIdFromToken(token: string): string {
+  return encodeHexLowerCase(sha256(new TextEncoder().encode(token)));
+}
+
+export type SessionState = "valid" | "renew" | "expired";
+
+export function sessionState(expiresAt: Date, now: Date): SessionState {
+  const left = expiresAt.getTime() - now.getTime();
+  if (left <= 0) return "expired";
+  return left < sessionRenewWithinMs ? "renew" : "valid";
+}
+
+export function sessionExpiry(now: Date): Date {
+  return new Date(now.getTime() + sessionLifetimeMs);
+}

@@ -1,0 +1,59 @@
+import { and, asc, eq } from "drizzle-orm";
+import type { Beam } from "@spanwright/contracts";
+import type { Db } from "../db/client.js";
+import { beams } from "../db/schema.js";
+
+const columns = {
+  id: beams.id,
+  projectId: beams.projectId,
+  name: beams.name,
+  latestVersion: beams.latestVersion,
+  createdAt: beams.createdAt,
+  updatedAt: beams.updatedAt,
+};
+
+type Row = { id: string; projectId: string; name: string; latestVersion: number; createdAt: Date; updatedAt: Date };
+
+const toBeam = (r: Row): Beam => ({ ...r, createdAt: r.createdAt.toISOString(), updatedAt: r.updatedAt.toISOString() });
+
+export async function listBeams(db: Db, projectId: string): Promise<Beam[]> {
+  const rows = await db.select(columns).from(beams).where(eq(beams.projectId, projectId)).orderBy(asc(beams.name), asc(beams.id));
+  return rows.map(toBeam);
+}
+
+/** The beam only if it belongs to the project: an id from another project is "not found". */
+export async function findBeam(db: Db, projectId: string, beamId: string): Promise<Beam | null> {
+  const [row] = await db.select(columns).from(beams).where(and(eq(beams.id, beamId), eq(beams.projectId, projectId)));
+  return row ? toBeam(row) : null;
+}
+
+export async function insertBeam(db: Db, values: { projectId: string; name: string; now: Date }): Promise<Beam> {
+  const [row] = await db
+    .insert(beams)
+    .values({ projectId: values.projectId, name: values.name, latestVersion: 1, createdAt: values.now, updatedAt: values.now })
+    .returning(columns);
+  if (!row) throw new Error("insert beams returned no row");
+  return toBeam(row);
+}
+
+export async function renameBeam(db: Db, beamId: string, name: string, now: Date): Promise<void> {
+  await db.update(beams).set({ name, updatedAt: now }).where(eq(beams.id, beamId));
+}
+
+export async function deleteBeam(db: Db, beamId: string): Promise<void> {
+  await db.delete(beams).where(eq(beams.id, beamId));
+}
+
+/**
+ * The optimistic-concurrency step: moves `latest_version` from `baseVersion` to `baseVersion + 1`
+ * only if it still is `baseVersion`. The row lock makes a concurrent save wait, then find the
+ * version moved and get false: exactly one of two saves on the same base wins.
+ */
+export async function advanceVersion(db: Db, beamId: string, baseVersion: number, now: Date): Promise<boolean> {
+  const rows = await db
+    .update(beams)
+    .set({ latestVersion: baseVersion + 1, updatedAt: now })
+    .where(and(eq(beams.id, beamId), eq(beams.latestVersion, baseVersion)))
+    .returning({ id: beams.id });
+  return rows.length > 0;
+}

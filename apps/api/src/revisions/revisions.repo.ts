@@ -1,0 +1,109 @@
+import { and, desc, eq } from "drizzle-orm";
+import { alias } from "drizzle-orm/pg-core";
+import type { Revision, RevisionSummary } from "@spanwright/contracts";
+import type { Db } from "../db/client.js";
+import { beamRevisions, revisionResults, users } from "../db/schema.js";
+
+const checker = alias(users, "checker");
+
+const summaryColumns = {
+  id: beamRevisions.id,
+  version: beamRevisions.version,
+  authorId: beamRevisions.authorId,
+  authorName: users.name,
+  createdAt: beamRevisions.createdAt,
+  changeSummary: beamRevisions.changeSummary,
+  status: beamRevisions.status,
+  checkedById: beamRevisions.checkedById,
+  checkedByName: checker.name,
+  checkedAt: beamRevisions.checkedAt,
+  checkComment: beamRevisions.checkComment,
+};
+
+type SummaryRow = {
+  id: string;
+  version: number;
+  authorId: string;
+  authorName: string;
+  createdAt: Date;
+  changeSummary: string;
+  status: RevisionSummary["status"];
+  checkedById: string | null;
+  checkedByName: string | null;
+  checkedAt: Date | null;
+  checkComment: string | null;
+};
+
+const toSummary = (r: SummaryRow): RevisionSummary => ({
+  version: r.version,
+  author: { id: r.authorId, name: r.authorName },
+  createdAt: r.createdAt.toISOString(),
+  changeSummary: r.changeSummary,
+  status: r.status,
+  checkedBy: r.checkedById ? { id: r.checkedById, name: r.checkedByName ?? "" } : null,
+  checkedAt: r.checkedAt ? r.checkedAt.toISOString() : null,
+  checkComment: r.checkComment,
+});
+
+export async function listRevisions(db: Db, beamId: string): Promise<RevisionSummary[]> {
+  const rows = await db
+    .select(summaryColumns)
+    .from(beamRevisions)
+    .innerJoin(users, eq(users.id, beamRevisions.authorId))
+    .leftJoin(checker, eq(checker.id, beamRevisions.checkedById))
+    .where(eq(beamRevisions.beamId, beamId))
+    .orderBy(desc(beamRevisions.version));
+  return rows.map(toSummary);
+}
+
+/** One revision with its model and stored result, plus its row id for follow-up writes. */
+export async function findRevision(db: Db, beamId: string, version: number): Promise<(Revision & { id: string }) | null> {
+  const [row] = await db
+    .select({ ...summaryColumns, model: beamRevisions.model, result: revisionResults.result })
+    .from(beamRevisions)
+    .innerJoin(users, eq(users.id, beamRevisions.authorId))
+    .innerJoin(revisionResults, eq(revisionResults.revisionId, beamRevisions.id))
+    .leftJoin(checker, eq(checker.id, beamRevisions.checkedById))
+    .where(and(eq(beamRevisions.beamId, beamId), eq(beamRevisions.version, version)));
+  if (!row) return null;
+  return {
+    id: row.id,
+    ...toSummary(row),
+    model: row.model as Record<string, unknown>,
+    result: row.result as Record<string, unknown>,
+  };
+}
+
+/** Writes a revision and its result; the caller runs this inside the transaction that bumped the version. */
+export async function insertRevisionWithResult(
+  db: Db,
+  values: { beamId: string; version: number; model: unknown; result: unknown; authorId: string; changeSummary: string; now: Date },
+): Promise<void> {
+  const [row] = await db
+    .insert(beamRevisions)
+    .values({
+      beamId: values.beamId,
+      version: values.version,
+      model: values.model,
+      authorId: values.authorId,
+      changeSummary: values.changeSummary,
+      createdAt: values.now,
+    })
+    .returning({ id: beamRevisions.id });
+  if (!row) throw new Error("insert beam_revisions returned no row");
+  await db.insert(revisionResults).values({ revisionId: row.id, result: values.result, createdAt: values.now });
+}
+
+/** Marks a draft checked; false when it was no longer a draft (checked revisions are immutable). */
+export async function markChecked(
+  db: Db,
+  revisionId: string,
+  values: { checkedById: string; checkedAt: Date; checkComment: string | null },
+): Promise<boolean> {
+  const rows = await db
+    .update(beamRevisions)
+    .set({ ...values, status: "checked" })
+    .where(and(eq(beamRevisions.id, revisionId), eq(beamRevisions.status, "draft")))
+    .returning({ id: beamRevisions.id });
+  return rows.length > 0;
+}

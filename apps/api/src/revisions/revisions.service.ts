@@ -1,0 +1,93 @@
+import type { CheckRevisionRequest, Revision, RevisionSummary, SaveRevisionRequest } from "@spanwright/contracts";
+import { authorize } from "../access/access.js";
+import { recordAudit } from "../audit/audit.repo.js";
+import type { BeamsService } from "../beams/beams.service.js";
+import { advanceVersion } from "../beams/beams.repo.js";
+import type { Clock } from "../clock.js";
+import { inTransaction, type Db } from "../db/client.js";
+import { AppError } from "../http/appError.js";
+import { runSolver, type Engine } from "../solve/engine.js";
+import * as repo from "./revisions.repo.js";
+
+export function createRevisionsService(deps: { db: Db; clock: Clock; engine: Engine; beams: BeamsService }) {
+  const { db, clock, engine, beams } = deps;
+
+  async function requireRevision(tx: Db, beamId: string, version: number) {
+    const revision = await repo.findRevision(tx, beamId, version);
+    if (!revision) throw new AppError("not-found", "revision not found");
+    return revision;
+  }
+
+  const toPublic = ({ id: _rowId, ...revision }: Revision & { id: string }): Revision => revision;
+
+  return {
+    async list(actorId: string, projectId: string, beamId: string): Promise<RevisionSummary[]> {
+      await authorize(db, projectId, actorId, "read");
+      await beams.requireBeam(db, projectId, beamId);
+      return repo.listRevisions(db, beamId);
+    },
+
+    async get(actorId: string, projectId: string, beamId: string, version: number): Promise<Revision> {
+      await authorize(db, projectId, actorId, "read");
+      await beams.requireBeam(db, projectId, beamId);
+      return toPublic(await requireRevision(db, beamId, version));
+    },
+
+    /**
+     * Saves a new revision on top of `baseVersion`. Never overwrites: if someone saved since, 409
+     * `version-conflict` with the current revision in details. The result is computed here and
+     * stored with the revision in the same transaction.
+     */
+    async save(actorId: string, projectId: string, beamId: string, input: Required<SaveRevisionRequest>): Promise<Revision> {
+      await authorize(db, projectId, actorId, "edit");
+      await beams.requireBeam(db, projectId, beamId);
+      const result = runSolver(engine, input.model);
+      const now = clock.now();
+      const version = input.baseVersion + 1;
+      const saved = await inTransaction(db, async (tx) => {
+        if (!(await advanceVersion(tx, beamId, input.baseVersion, now))) return false;
+        await repo.insertRevisionWithResult(tx, {
+          beamId,
+          version,
+          model: input.model,
+          result,
+          authorId: actorId,
+          changeSummary: input.changeSummary,
+          now,
+        });
+        await recordAudit(tx, { projectId, actorId, action: "revision.saved", details: { beamId, version } });
+        return true;
+      });
+      if (!saved) {
+        const beam = await beams.requireBeam(db, projectId, beamId);
+        const current = toPublic(await requireRevision(db, beamId, beam.latestVersion));
+        throw new AppError(
+          "version-conflict",
+          `revision ${beam.latestVersion} was saved since you opened revision ${input.baseVersion}`,
+          { baseVersion: input.baseVersion, current },
+        );
+      }
+      return toPublic(await requireRevision(db, beamId, version));
+    },
+
+    /** Marks a draft checked (checkers only). A checked revision never changes again. */
+    async check(actorId: string, projectId: string, beamId: string, version: number, input: CheckRevisionRequest): Promise<Revision> {
+      await authorize(db, projectId, actorId, "check");
+      await beams.requireBeam(db, projectId, beamId);
+      const revision = await requireRevision(db, beamId, version);
+      const changed = await inTransaction(db, async (tx) => {
+        const ok = await repo.markChecked(tx, revision.id, {
+          checkedById: actorId,
+          checkedAt: clock.now(),
+          checkComment: input.comment ?? null,
+        });
+        if (ok) await recordAudit(tx, { projectId, actorId, action: "revision.checked", details: { beamId, version } });
+        return ok;
+      });
+      if (!changed) throw new AppError("already-checked", `revision ${version} is already ${revision.status}`);
+      return toPublic(await requireRevision(db, beamId, version));
+    },
+  };
+}
+
+export type RevisionsService = ReturnType<typeof createRevisionsService>;

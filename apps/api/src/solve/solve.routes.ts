@@ -1,0 +1,16 @@
+import { apiRoutes } from "@spanwright/contracts";
+import type { Router } from "express";
+import { requireAuth } from "../auth/sessionCookie.js";
+import { runSolver, type Engine } from "./engine.js";
+
+/**
+ * Stateless `POST /api/solve`: the body is a model, the answer the result (200) or the solver's
+ * error (422) as `{ error: { code, message, where, details: { where } } }`; `where` sits at the top
+ * level too, as the exchange format's error object has it.
+ */
+export function registerSolveRoutes(router: Router, engine: Engine): void {
+  router.post(apiRoutes.solve.path, (req, res) => {
+    requireAuth(res);
+    res.json(runSolver(engine, req.body));
+  });
+}
