@@ -7,7 +7,16 @@
 export type UnitSystem = "si" | "us";
 
 /** Physical quantities the hand-off documents show. */
-export type Quantity = "force" | "moment" | "length" | "distributed" | "deflection" | "modulus" | "inertia";
+export type Quantity =
+  | "force"
+  | "moment"
+  | "length"
+  | "distributed"
+  | "deflection"
+  | "modulus"
+  | "inertia"
+  | "springTranslation"
+  | "springRotation";
 
 export interface DisplayUnit {
   /** Label shown in headers, e.g. "kN·m". */
@@ -31,6 +40,8 @@ const UNITS: Record<UnitSystem, Record<Quantity, DisplayUnit>> = {
     modulus: { label: "GPa", toSI: 1e9 },
     // 10⁶ mm⁴ = 1e-6 m⁴: the usual size of steel-section tables (common practice).
     inertia: { label: "10⁶ mm⁴", toSI: 1e-6 },
+    springTranslation: { label: "kN/m", toSI: 1e3 },
+    springRotation: { label: "kN·m/rad", toSI: 1e3 },
   },
   us: {
     force: { label: "kip", toSI: KIP_N },
@@ -40,6 +51,8 @@ const UNITS: Record<UnitSystem, Record<Quantity, DisplayUnit>> = {
     deflection: { label: "in", toSI: IN_M },
     modulus: { label: "ksi", toSI: KIP_N / (IN_M * IN_M) },
     inertia: { label: "in⁴", toSI: IN_M ** 4 },
+    springTranslation: { label: "kip/in", toSI: KIP_N / IN_M },
+    springRotation: { label: "kip·ft/rad", toSI: KIP_N * FT_M },
   },
 };
 
