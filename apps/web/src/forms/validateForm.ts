@@ -3,12 +3,15 @@ import { isApiError, type FieldErrors } from "../api/client";
 
 export type FormResult<T> = { ok: true; data: T } | { ok: false; errors: FieldErrors };
 
-/** First message per dot-joined path, matching the keys the API client extracts from the server. */
+/**
+ * First message per dot-joined path, matching the keys the API client extracts from the server.
+ * A rule on the whole object (e.g. "give at least one field") lands under the empty key "".
+ */
 export function fieldErrorsFromIssues(issues: readonly z.core.$ZodIssue[]): FieldErrors {
   const out: Record<string, string> = {};
   for (const issue of issues) {
     const key = issue.path.map(String).join(".");
-    if (key !== "" && !(key in out)) out[key] = issue.message;
+    if (!(key in out)) out[key] = issue.message;
   }
   return out;
 }

@@ -59,7 +59,7 @@ export function ProjectSettings({ project }: { project: Project }) {
   }
 
   const errors = mergeFieldErrors(clientErrors, update.error);
-  const message = formLevelMessage(update.error, fields);
+  const message = formLevelMessage(update.error, fields) ?? errors[""] ?? null;
   return (
     <Card title="Settings">
       {/* key: refill the form from the server's answer after a save or a refetch. */}
