@@ -9,3 +9,4 @@ export * from "./usUnits.js";
 export * from "./sections/index.js";
 export * from "./materials/index.js";
 export * from "./combinations/index.js";
+export * from "./checks/index.js";

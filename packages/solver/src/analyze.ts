@@ -1,0 +1,201 @@
+import type { BeamModel } from "./beamModelSchema.js";
+import type { Analysis, AnalysisCase, AnalysisCombination, Curve } from "./analysisTypes.js";
+import { assembleStiffness, segmentSections, type AssembledSystem } from "./assembleStiffness.js";
+import { factorBanded, solveFactored, type BandedSymmetricMatrix } from "./bandedMatrix.js";
+import { describeMechanism } from "./describeMechanism.js";
+import { fail, ok, unwrap, type Result } from "./errors.js";
+import { buildBases, buildLoadGrid, type BasisLoads, type LoadGrid } from "./loadGrid.js";
+import { elementDofs, numberDofs, type DofMap } from "./numberDofs.js";
+import { COEFFICIENTS_PER_INTERVAL, equivalentNodalLoads, marchSegment, solveStartForces, type SegmentSection } from "./segmentField.js";
+import { validateModel } from "./validateModel.js";
+
+interface Context {
+  model: BeamModel;
+  grid: LoadGrid;
+  dofs: DofMap;
+  sections: SegmentSection[];
+  lengths: Float64Array;
+  system: AssembledSystem;
+  factors: BandedSymmetricMatrix;
+  supportedNodes: number[];
+}
+
+/**
+ * Solves a validated model: factors the banded stiffness once, then solves every load case (and
+ * every span piece of a patterned case) as another right-hand side, and builds the exact fields
+ * of each case and combination. Fails with `mechanism` when the beam cannot carry load.
+ */
+export function analyzeModel(model: BeamModel): Result<Analysis> {
+  const dofs = numberDofs(model);
+  const sections = segmentSections(model);
+  const system = assembleStiffness(model, dofs, sections);
+  const factored = factorBanded(system.stiffness);
+  if (!factored.ok) return { ok: false, error: describeMechanism(model, dofs, factored.mode) };
+  const supportedNodes = model.nodes.flatMap((node, i) => (node.support ? [i] : []));
+  if (supportedNodes.length === 0) return fail("mechanism", "the beam cannot carry load: it has no supports", "nodes");
+  const grid = buildLoadGrid(model);
+  const lengths = Float64Array.from(sections, (_, e) => model.nodes[e + 1]!.x - model.nodes[e]!.x);
+  const context: Context = { model, grid, dofs, sections, lengths, system, factors: factored.factors, supportedNodes };
+  const bases = buildBases(model, grid);
+  const curves = bases.map((basis) => solveBasis(context, basis));
+  const cases: AnalysisCase[] = model.loadCases.map((loadCase, caseIndex) => {
+    const pieces = bases.flatMap((basis, b) => (basis.caseIndex === caseIndex ? [{ span: basis.span, curve: curves[b]! }] : []));
+    const curve = combineCurves(context, pieces.map((p) => ({ curve: p.curve, factor: 1 })));
+    return { id: loadCase.id, category: loadCase.category, pattern: loadCase.pattern === true, curve, pieces: loadCase.pattern ? pieces : [] };
+  });
+  const caseIndexById = new Map(cases.map((c, i) => [c.id, i]));
+  const combinations: AnalysisCombination[] = model.combinations.map((combination) => {
+    const factors = Object.entries(combination.factors).map(([id, factor]) => ({ caseIndex: caseIndexById.get(id)!, factor }));
+    const curve = combineCurves(context, factors.map((f) => ({ curve: cases[f.caseIndex]!.curve, factor: f.factor })));
+    return { id: combination.id, factors, curve };
+  });
+  return ok({
+    theory: model.theory,
+    nodes: model.nodes.map((node) => ({ x: node.x, hinge: node.hinge === true, support: node.support?.type ?? null })),
+    supportedNodes,
+    spans: grid.spans,
+    grid: grid.x,
+    cases,
+    combinations,
+    stations: model.stations ?? [],
+  });
+}
+
+/** Validates then analyses; expected failures come back as values. */
+export function tryAnalyze(input: unknown): Result<Analysis> {
+  const validated = validateModel(input);
+  return validated.ok ? analyzeModel(validated.value) : validated;
+}
+
+/**
+ * Analyses a validated model for the editor (results, envelopes and diagrams are read from it
+ * with `valuesAt`, `envelopeAt`, `diagram`, …). Throws `SolverError` with code `mechanism`.
+ */
+export function analyze(model: BeamModel): Analysis {
+  return unwrap(analyzeModel(model));
+}
+
+function emptyCurve(context: Context): Curve {
+  const n = context.model.nodes.length;
+  const m = context.supportedNodes.length;
+  return {
+    coef: new Float64Array((context.grid.x.length - 1) * COEFFICIENTS_PER_INTERVAL),
+    uy: new Float64Array(n),
+    rzLeft: new Float64Array(n),
+    rzRight: new Float64Array(n),
+    fy: new Float64Array(m),
+    mz: new Float64Array(m),
+  };
+}
+
+function combineCurves(context: Context, terms: { curve: Curve; factor: number }[]): Curve {
+  if (terms.length === 1 && terms[0]!.factor === 1) return terms[0]!.curve;
+  const out = emptyCurve(context);
+  for (const { curve, factor } of terms) {
+    for (const key of ["coef", "uy", "rzLeft", "rzRight", "fy", "mz"] as const) {
+      const target = out[key];
+      const source = curve[key];
+      for (let i = 0; i < target.length; i++) target[i]! += factor * source[i]!;
+    }
+  }
+  return out;
+}
+
+function solveBasis(context: Context, basis: BasisLoads): Curve {
+  const { model, grid, dofs, sections, lengths, system } = context;
+  const nSeg = sections.length;
+  const particular = new Float64Array(4 * nSeg);
+  const state = new Float64Array(4);
+  const equivalent = new Float64Array(4);
+  const rhs = new Float64Array(dofs.count);
+  const add = (dof: number, v: number) => {
+    if (dof >= 0) rhs[dof]! += v;
+  };
+  for (let e = 0; e < nSeg; e++) {
+    state.fill(0);
+    marchSegment(grid, basis, e, sections[e]!, state);
+    particular.set(state, 4 * e);
+    if (state[0] === 0 && state[1] === 0 && state[2] === 0 && state[3] === 0) continue;
+    equivalentNodalLoads(lengths[e]!, sections[e]!, state, equivalent);
+    elementDofs(dofs, e).forEach((dof, a) => add(dof, equivalent[a]!));
+  }
+  grid.pointNode.forEach((node, j) => {
+    if (node < 0) return;
+    add(dofs.uy[node]!, basis.fy[j]!);
+    add(dofs.rzRight[node]!, basis.mz[j]!);
+  });
+  const settled = new Float64Array(model.nodes.length);
+  for (const { node, uy } of basis.settlements) settled[node]! += uy;
+  for (const { node } of basis.settlements) {
+    for (const [e, local] of [
+      [node - 1, 2],
+      [node, 0],
+    ] as const) {
+      if (e < 0 || e >= nSeg) continue;
+      const map = elementDofs(dofs, e);
+      for (let a = 0; a < 4; a++) add(map[a]!, -system.elements[16 * e + 4 * a + local]! * settled[node]!);
+    }
+  }
+  solveFactored(context.factors, rhs);
+  const curve = emptyCurve(context);
+  const value = (dof: number) => (dof >= 0 ? rhs[dof]! : 0);
+  for (let i = 0; i < model.nodes.length; i++) {
+    curve.uy[i] = dofs.uy[i]! >= 0 ? rhs[dofs.uy[i]!]! : settled[i]!;
+    curve.rzLeft[i] = value(dofs.rzLeft[i]!);
+    curve.rzRight[i] = value(dofs.rzRight[i]!);
+  }
+  const startV = new Float64Array(nSeg + 1);
+  const startM = new Float64Array(nSeg + 1);
+  const endV = new Float64Array(nSeg + 1);
+  const endM = new Float64Array(nSeg + 1);
+  for (let e = 0; e < nSeg; e++) {
+    const { V0, M0 } = solveStartForces(lengths[e]!, sections[e]!, particular.subarray(4 * e, 4 * e + 4), curve.uy[e]!, curve.rzRight[e]!, curve.uy[e + 1]!, curve.rzLeft[e + 1]!);
+    state[0] = V0;
+    state[1] = M0;
+    state[2] = curve.rzRight[e]!;
+    state[3] = curve.uy[e]!;
+    marchSegment(grid, basis, e, sections[e]!, state, curve.coef);
+    startV[e] = V0;
+    startM[e] = M0;
+    endV[e + 1] = state[0]!;
+    endM[e + 1] = state[1]!;
+  }
+  recoverReactions(context, basis, curve, startV, startM, endV, endM);
+  return curve;
+}
+
+/**
+ * Reactions from the jumps of the exact fields at each support: V(x⁺) − V(x⁻) = R + P and
+ * M(x⁺) − M(x⁻) = −(m_R + m) (CCW moments lower M). Springs give −k·u directly; a component the
+ * support does not restrain is exactly zero.
+ */
+function recoverReactions(context: Context, basis: BasisLoads, curve: Curve, startV: Float64Array, startM: Float64Array, endV: Float64Array, endM: Float64Array): void {
+  const { model, grid } = context;
+  const nSeg = context.sections.length;
+  context.supportedNodes.forEach((node, r) => {
+    const support = model.nodes[node]!.support!;
+    const j = grid.segmentFirstInterval[node]!;
+    const jumpV = (node < nSeg ? startV[node]! : 0) - endV[node]!;
+    const jumpM = (node < nSeg ? startM[node]! : 0) - endM[node]!;
+    switch (support.type) {
+      case "spring":
+        curve.fy[r] = -(support.ky ?? 0) * curve.uy[node]!;
+        curve.mz[r] = -(support.kr ?? 0) * curve.rzRight[node]!;
+        break;
+      case "pinned":
+        curve.fy[r] = jumpV - basis.fy[j]!;
+        break;
+      case "guided":
+        curve.mz[r] = -jumpM - basis.mz[j]!;
+        break;
+      case "fixed":
+        curve.fy[r] = jumpV - basis.fy[j]!;
+        curve.mz[r] = -jumpM - basis.mz[j]!;
+        break;
+      default: {
+        const never: never = support;
+        return never;
+      }
+    }
+  });
+}

@@ -1,0 +1,41 @@
+import { describe, expect, it } from "vitest";
+import { evaluatePolynomial, findSignChanges } from "./polynomial.js";
+
+describe("evaluatePolynomial", () => {
+  it.each([
+    { coef: [1, 2, 3], u: 2, expected: 17 },
+    { coef: [0, 0, 0, 1], u: -3, expected: -27 },
+    { coef: [5], u: 100, expected: 5 },
+  ])("evaluates $coef at $u", ({ coef, u, expected }) => {
+    expect(evaluatePolynomial(coef, 0, coef.length - 1, u)).toBe(expected);
+  });
+
+  it("reads a slice at an offset", () => {
+    expect(evaluatePolynomial([9, 9, 1, 1], 2, 1, 4)).toBe(5);
+  });
+});
+
+describe("findSignChanges", () => {
+  it.each([
+    { name: "linear", coef: [-1, 2], lo: 0, hi: 1, roots: [0.5] },
+    { name: "quadratic with two roots", coef: [2, -3, 1], lo: 0, hi: 3, roots: [1, 2] },
+    { name: "cubic (u-1)(u-2)(u-3)", coef: [-6, 11, -6, 1], lo: 0, hi: 4, roots: [1, 2, 3] },
+    { name: "quintic (u²-2)(u-0.5)u(u+1)", coef: [0, 1, 2.5, -2.5, -0.5, 1].map((c) => c), lo: -3, hi: 3, roots: null },
+    { name: "double root has no sign change", coef: [1, -2, 1], lo: 0, hi: 2, roots: [] },
+    { name: "roots outside the interval are ignored", coef: [-6, 11, -6, 1], lo: 1.5, hi: 2.5, roots: [2] },
+  ])("finds the roots of a $name polynomial", ({ coef, lo, hi, roots }) => {
+    const found = findSignChanges(coef, 0, coef.length - 1, lo, hi);
+    if (roots === null) {
+      for (const r of found) expect(Math.abs(evaluatePolynomial(coef, 0, coef.length - 1, r))).toBeLessThan(1e-12);
+      return;
+    }
+    expect(found).toHaveLength(roots.length);
+    found.forEach((r, i) => expect(r).toBeCloseTo(roots[i]!, 12));
+  });
+
+  it("finds all five roots of a quintic with known roots", () => {
+    // (u+2)(u+1)u(u-1)(u-2) = u^5 - 5u^3 + 4u
+    const found = findSignChanges([0, 4, 0, -5, 0, 1], 0, 5, -2.5, 2.5);
+    expect(found.map((r) => Math.round(r * 1e9) / 1e9)).toEqual([-2, -1, 0, 1, 2]);
+  });
+});
