@@ -1,0 +1,17 @@
+import type { ToolState } from "../Tool";
+
+export const idle: ToolState = {
+  id: "idle",
+  onPointer(input, ctx) {
+    if (input.type !== "down") return;
+    const target = input.target;
+    const { store } = ctx;
+    if (!target) {
+      store.setUi({ selection: null });
+      return;
+    }
+    store.setUi({ selection: target });
+    if (target.kind === "segment") return;
+    return { to: "pointing", data: { startPx: input.px, startX: input.x, target } };
+  },
+};

@@ -1,0 +1,7 @@
+import type { Tool } from "../Tool";
+import { draggingLoad } from "./draggingLoad";
+import { draggingNode } from "./draggingNode";
+import { idle } from "./idle";
+import { pointing } from "./pointing";
+
+export const selectTool: Tool = { id: "select", initial: "idle", states: [idle, pointing, draggingNode, draggingLoad] };
