@@ -3,3 +3,7 @@ export * from "./units.js";
 export * from "./reactionTable.js";
 export * from "./csv.js";
 export * from "./loadSchedule.js";
+export * from "./spans.js";
+export * from "./modelDiff.js";
+export * from "./modelDiffSummary.js";
+export * from "./compare.js";
