@@ -4,6 +4,7 @@ import { createApp, type Services } from "../app.js";
 import { loadConfig, type Config } from "../config.js";
 import { connectDatabase, type Database } from "../db/client.js";
 import type { Engine } from "../solve/engine.js";
+import { solverEngine } from "../solve/solverEngine.js";
 import { Client, testOrigin } from "./client.js";
 import { createTestClock, type TestClock } from "./testClock.js";
 import { createTestDatabase, type TestDatabase } from "./testDatabase.js";
@@ -19,14 +20,6 @@ export interface TestApp {
   /** Signs up a new account (through the API) and returns a client holding its session. */
   signUp(name: string, email?: string, password?: string): Promise<{ client: Client; userId: string; email: string; password: string }>;
   close(): Promise<void>;
-}
-
-async function defaultEngine(): Promise<Engine> {
-  try {
-    return (await import("../solve/solverEngine.js")).solverEngine;
-  } catch {
-    return (await import("./provisionalEngine.js")).provisionalEngine;
-  }
 }
 
 let counter = 0;
@@ -53,7 +46,7 @@ export async function createTestApp(options: { env?: Record<string, string>; eng
   const config = testConfig(testDatabase.url, options.env);
   const database = connectDatabase(config.databaseUrl, { max: 5 });
   const clock = createTestClock();
-  const { app, services } = createApp({ config, database, engine: options.engine ?? (await defaultEngine()), clock });
+  const { app, services } = createApp({ config, database, engine: options.engine ?? solverEngine, clock });
   const client = () => new Client(app);
   return {
     app,

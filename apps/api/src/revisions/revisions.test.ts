@@ -1,0 +1,90 @@
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { createTestApp, invalidModel, twoSpanModel, type TestApp } from "../testing/index.js";
+
+let t: TestApp;
+beforeAll(async () => {
+  t = await createTestApp();
+});
+afterAll(() => t.close());
+
+async function beamWithTeam() {
+  const owner = await t.signUp("Owner");
+  const checker = await t.signUp("Checker");
+  const { project } = (await owner.client.post("/api/projects", { name: "Revisions test" })).body;
+  await owner.client.post(`/api/projects/${project.id}/members`, { email: checker.email, role: "checker" });
+  const { beam } = (await owner.client.post(`/api/projects/${project.id}/beams`, { name: "B", model: twoSpanModel() })).body;
+  return { owner, checker, base: `/api/projects/${project.id}/beams/${beam.id}/revisions`, beamPath: `/api/projects/${project.id}/beams/${beam.id}` };
+}
+
+describe("revisions", () => {
+  it("saves revision 2 on top of 1 with its own result, keeping revision 1 unchanged", async () => {
+    const { owner, base, beamPath } = await beamWithTeam();
+    const res = await owner.client.post(base, { baseVersion: 1, model: twoSpanModel(-20_000), changeSummary: "heavier partition" });
+    expect(res.status).toBe(201);
+    expect(res.body.revision).toMatchObject({ version: 2, changeSummary: "heavier partition", status: "draft" });
+    // twice the load, twice the reaction (linear elastic)
+    expect(res.body.revision.result.results.D.reactions[0].fy).toBeCloseTo(37_500, 6);
+    const first = (await owner.client.get(`${base}/1`)).body.revision;
+    expect(first.result.results.D.reactions[0].fy).toBeCloseTo(18_750, 6);
+    expect((await owner.client.get(beamPath)).body.beam.latestVersion).toBe(2);
+    const list = (await owner.client.get(base)).body.revisions;
+    expect(list.map((r: { version: number }) => r.version)).toEqual([2, 1]);
+    expect(list[0]).not.toHaveProperty("model");
+  });
+
+  it("answers a stale baseVersion with 409 and the current revision, never overwriting", async () => {
+    const { owner, base } = await beamWithTeam();
+    await owner.client.post(base, { baseVersion: 1, model: twoSpanModel(-20_000) });
+    const stale = await owner.client.post(base, { baseVersion: 1, model: twoSpanModel(-30_000) });
+    expect(stale.status).toBe(409);
+    expect(stale.body.error.code).toBe("version-conflict");
+    expect(stale.body.error.details.current.version).toBe(2);
+    expect(stale.body.error.details.current.model).toEqual(twoSpanModel(-20_000));
+    expect((await owner.client.get(base)).body.revisions).toHaveLength(2);
+  });
+
+  it("lets exactly one of two simultaneous saves on the same base win", async () => {
+    const { owner, base } = await beamWithTeam();
+    const results = await Promise.all(
+      [-11_000, -12_000, -13_000, -14_000].map((q) => owner.client.post(base, { baseVersion: 1, model: twoSpanModel(q) })),
+    );
+    const statuses = results.map((r) => r.status).sort();
+    expect(statuses).toEqual([201, 409, 409, 409]);
+    expect((await owner.client.get(base)).body.revisions).toHaveLength(2);
+  });
+
+  it("answers 422 for an invalid model and keeps the version where it was", async () => {
+    const { owner, base } = await beamWithTeam();
+    const res = await owner.client.post(base, { baseVersion: 1, model: invalidModel() });
+    expect(res.status).toBe(422);
+    expect(res.body.error.code).toBe("invalid-model");
+    expect((await owner.client.post(base, { baseVersion: 1, model: twoSpanModel() })).status).toBe(201);
+  });
+
+  it("lets a checker mark a revision checked with a comment, once", async () => {
+    const { checker, base } = await beamWithTeam();
+    const res = await checker.client.post(`${base}/1/check`, { comment: "Reactions agree with hand check" });
+    expect(res.status).toBe(200);
+    expect(res.body.revision).toMatchObject({
+      status: "checked",
+      checkedBy: { id: checker.userId, name: "Checker" },
+      checkComment: "Reactions agree with hand check",
+    });
+    const again = await checker.client.post(`${base}/1/check`, {});
+    expect(again.status).toBe(409);
+    expect(again.body.error.code).toBe("already-checked");
+  });
+
+  it("answers 404 for a revision that does not exist or a malformed version", async () => {
+    const { owner, base } = await beamWithTeam();
+    expect((await owner.client.get(`${base}/7`)).status).toBe(404);
+    expect((await owner.client.get(`${base}/x`)).status).toBe(404);
+  });
+
+  it("names baseVersion when it is missing", async () => {
+    const { owner, base } = await beamWithTeam();
+    const res = await owner.client.post(base, { model: twoSpanModel() });
+    expect(res.status).toBe(400);
+    expect(res.body.error.message).toContain("baseVersion");
+  });
+});
