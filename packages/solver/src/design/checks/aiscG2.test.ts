@@ -1,0 +1,37 @@
+import { describe, expect, it } from "vitest";
+import { INCH, KIP, KSI } from "../usUnits.js";
+import { checkAiscG2Shear, g2ShearStrength } from "./aiscG2.js";
+
+const E = 29_000 * KSI;
+const Fy = 50 * KSI;
+
+describe("AISC 360-22 §G2.1 shear of I-shape webs", () => {
+  it("W18x50 (h/tw = 45.2 ≤ 2.24√(E/Fy) = 53.9): φvVn = 1.00 × 0.6 × 50 × 18.0 × 0.355 = 192 kips, Vn/Ωv = 128 kips (AISC Manual Table 3-2, from memory)", () => {
+    const args = { d: 18.0 * INCH, tw: 0.355 * INCH, h: 45.2 * 0.355 * INCH, Fy, E, fabrication: "rolled" as const };
+    const lrfd = checkAiscG2Shear({ ...args, method: "LRFD", Vr: 100 * KIP });
+    const asd = checkAiscG2Shear({ ...args, method: "ASD", Vr: 100 * KIP });
+    expect(lrfd.capacity / KIP).toBeCloseTo(191.7, 1);
+    expect(asd.capacity / KIP).toBeCloseTo(127.8, 1);
+    expect(lrfd.source).toContain("G2.1(a)");
+    expect(lrfd.utilisation).toBeCloseTo(100 / 191.7, 3);
+  });
+
+  it("W24x55 (h/tw = 54.6 > 53.9): (b) applies with φv = 0.90 and Cv1 = 1.0: φvVn = 0.9 × 0.6 × 50 × 23.6 × 0.395 = 252 kips (Manual Table 3-2, from memory)", () => {
+    const s = g2ShearStrength(23.6 * INCH, 0.395 * INCH, 54.6 * 0.395 * INCH, Fy, E, "rolled");
+    expect(s.phi).toBe(0.9);
+    expect(s.Cv1).toBe(1);
+    expect((s.phi * s.Vn) / KIP).toBeCloseTo(251.7, 1);
+  });
+
+  it("slender built-up web, hand calculation: h/tw = 120 > 1.10√(5.34·E/Fy) = 61.2 → Cv1 = 0.510 (eq. G2-4)", () => {
+    // d = 1000 mm, tw = 8 mm, h = 960 mm, Fy = 345 MPa, E = 200 GPa:
+    // 1.10 × √(5.34 × 200000/345) = 1.10 × 55.64 = 61.20; Cv1 = 61.20/120 = 0.5100;
+    // Vn = 0.6 × 345 × 8000 mm² × 0.5100 = 844.6 kN; φvVn = 0.90 × 844.6 = 760.1 kN.
+    const s = g2ShearStrength(1.0, 0.008, 0.96, 345e6, 200e9, "built-up");
+    expect(s.Cv1).toBeCloseTo(0.51, 3);
+    expect(s.Vn / 1e3).toBeCloseTo(844.6, 0);
+    const r = checkAiscG2Shear({ d: 1.0, tw: 0.008, h: 0.96, Fy: 345e6, Vr: 800e3, method: "LRFD", fabrication: "built-up" });
+    expect(r.status).toBe("fail");
+    expect(r.capacity / 1e3).toBeCloseTo(760.1, 0);
+  });
+});
