@@ -1,0 +1,60 @@
+import { useEffect, useMemo, useRef, useState } from "react";
+import { tryAnalyze, type Analysis } from "@spanwright/solver";
+import type { BeamDocument } from "../model/BeamDocument";
+import { toExchange } from "../model/exchange";
+import type { SolveFailure, SolveRequest, SolveResponse } from "./solveMessages";
+
+export type AnalysisState =
+  | { readonly status: "solving"; readonly analysis: null; readonly error: null }
+  | { readonly status: "ready"; readonly analysis: Analysis; readonly error: null }
+  | { readonly status: "failed"; readonly analysis: null; readonly error: SolveFailure };
+
+const solving: AnalysisState = { status: "solving", analysis: null, error: null };
+
+function toState(response: SolveResponse): AnalysisState {
+  return response.ok ? { status: "ready", analysis: response.analysis, error: null } : { status: "failed", analysis: null, error: response.error };
+}
+
+/** The solver-relevant part of the document; title and display units do not change results. */
+function solverInput(doc: BeamDocument) {
+  return { nodes: doc.nodes, segments: doc.segments, loadCases: doc.loadCases, combinations: doc.combinations, theory: doc.theory, stations: doc.stations };
+}
+
+/**
+ * Solves the document on every change in a Web Worker (the newest request wins; stale answers are
+ * dropped). Where workers are missing (component tests) it solves synchronously instead.
+ */
+export function useAnalysis(doc: BeamDocument): AnalysisState {
+  const input = solverInput(doc);
+  // Re-solve only when a solver-relevant field changed (arrays are replaced on every edit).
+  const model = useMemo(() => toExchange(doc), [input.nodes, input.segments, input.loadCases, input.combinations, input.theory, input.stations]); // eslint-disable-line react-hooks/exhaustive-deps
+  const [state, setState] = useState<AnalysisState>(solving);
+  const worker = useRef<Worker | null>(null);
+  const seq = useRef(0);
+
+  useEffect(() => {
+    if (typeof Worker === "undefined") return;
+    const w = new Worker(new URL("./solver.worker.ts", import.meta.url), { type: "module" });
+    worker.current = w;
+    w.onmessage = (event: MessageEvent<SolveResponse>) => {
+      if (event.data.seq === seq.current) setState(toState(event.data));
+    };
+    return () => {
+      w.terminate();
+      worker.current = null;
+    };
+  }, []);
+
+  useEffect(() => {
+    seq.current += 1;
+    const request: SolveRequest = { seq: seq.current, model };
+    if (worker.current) {
+      worker.current.postMessage(request);
+      return;
+    }
+    const result = tryAnalyze(model);
+    setState(toState(result.ok ? { seq: request.seq, ok: true, analysis: result.value } : { seq: request.seq, ok: false, error: result.error }));
+  }, [model]);
+
+  return state;
+}
