@@ -10,3 +10,5 @@ export * from "./sections/index.js";
 export * from "./materials/index.js";
 export * from "./combinations/index.js";
 export * from "./checks/index.js";
+export * from "./profile/sectionProfile.js";
+export * from "./shear/shearShare.js";
