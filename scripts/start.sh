@@ -22,8 +22,17 @@ cleanup() {
 trap cleanup INT TERM EXIT
 
 pnpm --filter @spanwright/web build >/dev/null
-pnpm --filter @spanwright/api run migrate
-pnpm --filter @spanwright/api run seed
-pnpm --filter @spanwright/api run start &
+pnpm --silent --filter @spanwright/api run migrate
+pnpm --silent --filter @spanwright/api run seed
+
+PORT=${PORT:-3000}
+HOST=${HOST:-127.0.0.1}
+export PORT HOST
+echo
+echo "Spanwright: http://$HOST:$PORT"
+echo "Demo sign-in: demo@spanwright.test / spanwright-demo   (Ctrl-C stops)"
+echo
+# node itself (not pnpm) is the child, so the trap's kill reaches the server and it shuts down cleanly
+(cd apps/api && exec node --import tsx src/main.ts) &
 api_pid=$!
 wait "$api_pid"

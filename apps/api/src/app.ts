@@ -103,7 +103,8 @@ export function createApp(deps: AppDeps): { app: Express; services: Services; ap
   const app = express();
   app.disable("x-powered-by");
   app.set("trust proxy", config.trustProxy);
-  app.use(helmet());
+  // no upgrade-insecure-requests: the product is served over plain http on 127.0.0.1 by default
+  app.use(helmet({ contentSecurityPolicy: { directives: { upgradeInsecureRequests: null } } }));
   app.use(
     pinoHttp({
       logger,
