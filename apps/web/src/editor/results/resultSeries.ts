@@ -59,8 +59,9 @@ export function seriesFor(analysis: Analysis, name: string, isEnvelope: boolean,
   }
   const d = diagram(analysis, name, quantity, SAMPLES);
   if (!d) return null;
-  const e = quantity === "rz" ? null : extremes(analysis, name);
-  return { quantity, x: d.x, lines: [d.y], ...(e ? pickExtremes(e, quantity) : { max: null, min: null }) };
+  const e = extremes(analysis, name);
+  const picked = quantity === "rz" || !e ? { max: null, min: null } : pickExtremes(e, quantity);
+  return { quantity, x: d.x, lines: [d.y], ...picked };
 }
 
 function pickExtremes(e: NonNullable<ReturnType<typeof extremes>>, q: Exclude<Quantity, "rz">): { max: Extreme; min: Extreme } {
