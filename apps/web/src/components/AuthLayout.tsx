@@ -18,8 +18,9 @@ export function AuthLayout({ title, children, footer }: { title: string; childre
           </p>
           <svg viewBox="0 0 400 90" className="mt-10 w-full" aria-hidden="true">
             <path d="M10 40 H390" strokeWidth="4" className="stroke-ochre-400" />
+            {/* Exaggerated deflected shape under gravity load: sagging spans, level over the interior supports. */}
             <path
-              d="M10 40 C60 80 110 80 150 40 C190 0 200 0 200 40 C220 80 300 85 390 40"
+              d="M10 40 C50 80 110 40 150 40 C185 40 175 62 210 62 C245 62 235 40 270 40 C300 40 350 80 390 40"
               fill="none"
               strokeWidth="1.5"
               strokeDasharray="4 4"

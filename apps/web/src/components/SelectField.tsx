@@ -26,20 +26,29 @@ export function SelectField({ label, name, options, error, labelHidden, classNam
       >
         {label}
       </label>
-      <select
-        id={id}
-        name={name}
-        className={fieldClasses(error !== undefined)}
-        aria-invalid={error !== undefined || undefined}
-        aria-describedby={error !== undefined ? errorId : undefined}
-        {...rest}
-      >
-        {options.map((o) => (
-          <option key={o.value} value={o.value}>
-            {o.label}
-          </option>
-        ))}
-      </select>
+      <div className="relative">
+        <select
+          id={id}
+          name={name}
+          className={`${fieldClasses(error !== undefined)} appearance-none pr-9`}
+          aria-invalid={error !== undefined || undefined}
+          aria-describedby={error !== undefined ? errorId : undefined}
+          {...rest}
+        >
+          {options.map((o) => (
+            <option key={o.value} value={o.value}>
+              {o.label}
+            </option>
+          ))}
+        </select>
+        {/* The native arrow is replaced so selects match inputs in every browser. */}
+        <span
+          aria-hidden="true"
+          className="pointer-events-none absolute inset-y-0 right-3 flex items-center text-xs text-paper-600"
+        >
+          ▾
+        </span>
+      </div>
       {error !== undefined && (
         <p id={errorId} className="mt-1 text-sm font-medium text-danger-700">
           {asSentence(error)}

@@ -7,6 +7,9 @@ import { createQueryClient } from "../api/queryClient";
 /** Renders routes in memory with a fresh query client, as the app does, minus the browser URL. */
 export function renderRoutes(routes: RouteObject[], initialPath: string) {
   const queryClient = createQueryClient();
+  // Same retry policy as the app, without the back-off wait.
+  const defaults = queryClient.getDefaultOptions();
+  queryClient.setDefaultOptions({ ...defaults, queries: { ...defaults.queries, retryDelay: 0 } });
   const router = createMemoryRouter(routes, { initialEntries: [initialPath] });
   const view = render(
     <QueryClientProvider client={queryClient}>

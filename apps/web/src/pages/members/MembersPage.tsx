@@ -39,7 +39,7 @@ export function MembersPage() {
           </>
         }
       />
-      <div className="grid gap-6 lg:grid-cols-[minmax(0,2fr)_minmax(0,1fr)]">
+      <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,2fr)_minmax(0,1fr)]">
         <div className="space-y-6">
           <Card title="People on this project">
             {members.isPending && <Loading label="Loading members…" />}

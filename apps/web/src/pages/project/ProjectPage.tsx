@@ -43,7 +43,7 @@ export function ProjectPage() {
           <span>{unitSystemLabels[p.unitSystem]}</span>
         </div>
       </PageHeader>
-      <div className="grid gap-6 lg:grid-cols-[minmax(0,2fr)_minmax(0,1fr)]">
+      <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,2fr)_minmax(0,1fr)]">
         <BeamsSection project={p} />
         <div className="space-y-6">
           <MembersSummary project={p} />

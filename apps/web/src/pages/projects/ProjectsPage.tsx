@@ -13,7 +13,7 @@ export function ProjectsPage() {
   return (
     <>
       <PageHeader title="Projects" eyebrow="Your workspace" />
-      <div className="grid gap-8 lg:grid-cols-[minmax(0,2fr)_minmax(0,1fr)]">
+      <div className="grid items-start gap-8 lg:grid-cols-[minmax(0,2fr)_minmax(0,1fr)]">
         <section aria-labelledby="project-list-heading">
           <h2 id="project-list-heading" className="sr-only">
             Project list
