@@ -124,9 +124,12 @@ function solveBasis(context: Context, basis: BasisLoads): Curve {
     add(dofs.uy[node]!, basis.fy[j]!);
     add(dofs.rzRight[node]!, basis.mz[j]!);
   });
+  // The residual below uses the full nodal displacements, so it takes the loads before the
+  // settlements are moved to the right-hand side as −K_fr·u_r.
+  const loads = Float64Array.from(rhs);
   const settled = new Float64Array(model.nodes.length);
   for (const { node, uy } of basis.settlements) settled[node]! += uy;
-  for (const { node } of basis.settlements) {
+  for (const node of new Set(basis.settlements.map((s) => s.node))) {
     for (const [e, local] of [
       [node - 1, 2],
       [node, 0],
@@ -138,11 +141,20 @@ function solveBasis(context: Context, basis: BasisLoads): Curve {
   }
   solveFactored(context.factors, rhs);
   const curve = emptyCurve(context);
-  const value = (dof: number) => (dof >= 0 ? rhs[dof]! : 0);
-  for (let i = 0; i < model.nodes.length; i++) {
-    curve.uy[i] = dofs.uy[i]! >= 0 ? rhs[dofs.uy[i]!]! : settled[i]!;
-    curve.rzLeft[i] = value(dofs.rzLeft[i]!);
-    curve.rzRight[i] = value(dofs.rzRight[i]!);
+  const readNodes = () => {
+    const value = (dof: number) => (dof >= 0 ? rhs[dof]! : 0);
+    for (let i = 0; i < model.nodes.length; i++) {
+      curve.uy[i] = dofs.uy[i]! >= 0 ? rhs[dofs.uy[i]!]! : settled[i]!;
+      curve.rzLeft[i] = value(dofs.rzLeft[i]!);
+      curve.rzRight[i] = value(dofs.rzRight[i]!);
+    }
+  };
+  readNodes();
+  for (let step = 0; step < REFINEMENT_STEPS; step++) {
+    const correction = residual(context, curve, loads);
+    solveFactored(context.factors, correction);
+    for (let d = 0; d < rhs.length; d++) rhs[d]! += correction[d]!;
+    readNodes();
   }
   const startV = new Float64Array(nSeg + 1);
   const startM = new Float64Array(nSeg + 1);
@@ -150,18 +162,113 @@ function solveBasis(context: Context, basis: BasisLoads): Curve {
   const endM = new Float64Array(nSeg + 1);
   for (let e = 0; e < nSeg; e++) {
     const { V0, M0 } = solveStartForces(lengths[e]!, sections[e]!, particular.subarray(4 * e, 4 * e + 4), curve.uy[e]!, curve.rzRight[e]!, curve.uy[e + 1]!, curve.rzLeft[e + 1]!);
-    state[0] = V0;
-    state[1] = M0;
+    startV[e] = V0;
+    startM[e] = M0;
+  }
+  balanceChains(context, basis, particular, startV, startM);
+  for (let e = 0; e < nSeg; e++) {
+    state[0] = startV[e]!;
+    state[1] = startM[e]!;
     state[2] = curve.rzRight[e]!;
     state[3] = curve.uy[e]!;
     marchSegment(grid, basis, e, sections[e]!, state, curve.coef);
-    startV[e] = V0;
-    startM[e] = M0;
     endV[e + 1] = state[0]!;
     endM[e + 1] = state[1]!;
   }
   recoverReactions(context, basis, curve, startV, startM, endV, endM);
   return curve;
+}
+
+/**
+ * Steps of iterative refinement. A short, stiff segment next to soft ones makes the plain solve
+ * lose digits (error ≈ ε·k_stiff/k_soft); one step with the residual computed from element
+ * deformations (below) restores nearly full precision at the cost of one more back-substitution.
+ */
+const REFINEMENT_STEPS = 1;
+
+/**
+ * f − K·u over the free DOFs, with each element's end forces computed from its deformation
+ * (end rotations relative to the chord) so the rigid-body part cancels exactly and the residual
+ * is accurate even where K·u is a small difference of large terms.
+ */
+function residual(context: Context, curve: Curve, loads: Float64Array): Float64Array {
+  const { model, dofs, lengths, system } = context;
+  const r = Float64Array.from(loads);
+  for (let e = 0; e < lengths.length; e++) {
+    const chord = (curve.uy[e + 1]! - curve.uy[e]!) / lengths[e]!;
+    const phi1 = curve.rzRight[e]! - chord;
+    const phi2 = curve.rzLeft[e + 1]! - chord;
+    const k = system.elements;
+    const map = elementDofs(dofs, e);
+    for (let a = 0; a < 4; a++) {
+      if (map[a]! < 0) continue;
+      r[map[a]!]! -= k[16 * e + 4 * a + 1]! * phi1 + k[16 * e + 4 * a + 3]! * phi2;
+    }
+  }
+  model.nodes.forEach((node, i) => {
+    if (node.support?.type !== "spring") return;
+    if (dofs.uy[i]! >= 0) r[dofs.uy[i]!]! -= (node.support.ky ?? 0) * curve.uy[i]!;
+    if (dofs.rzLeft[i]! >= 0) r[dofs.rzLeft[i]!]! -= (node.support.kr ?? 0) * curve.rzLeft[i]!;
+  });
+  return r;
+}
+
+/**
+ * Internal forces recovered from displacements lose digits in short, stiff segments (they come
+ * from differences of nearly equal nodal values). Nodal equilibrium is exact, so along each chain
+ * of segments between supports the forces are propagated by statics from the best-known point:
+ * a free beam end (where V and M are the applied end loads, exactly), or else the most flexible
+ * segment of the chain (smallest EI/L³, whose displacement-based forces are the most accurate).
+ */
+function balanceChains(context: Context, basis: BasisLoads, particular: Float64Array, startV: Float64Array, startM: Float64Array): void {
+  const { model, grid, sections, lengths } = context;
+  const nSeg = sections.length;
+  const pointAt = (node: number) => grid.segmentFirstInterval[node]!;
+  const endV = (e: number) => startV[e]! + particular[4 * e]!;
+  const endM = (e: number) => startM[e]! + startV[e]! * lengths[e]! + particular[4 * e + 1]!;
+  // Across an unsupported node j: V jumps by the point load, M drops by the applied CCW moment.
+  const forward = (e: number) => {
+    const j = pointAt(e + 1);
+    startV[e + 1] = endV(e) + basis.fy[j]!;
+    startM[e + 1] = endM(e) - basis.mz[j]!;
+  };
+  const backward = (e: number) => {
+    const j = pointAt(e);
+    const Vend = startV[e]! - basis.fy[j]!;
+    const Mend = startM[e]! + basis.mz[j]!;
+    const L = lengths[e - 1]!;
+    startV[e - 1] = Vend - particular[4 * (e - 1)]!;
+    startM[e - 1] = Mend - startV[e - 1]! * L - particular[4 * (e - 1) + 1]!;
+  };
+  let first = 0;
+  while (first < nSeg) {
+    let last = first;
+    while (last + 1 < nSeg && model.nodes[last + 1]!.support === undefined) last++;
+    const freeLeft = first === 0 && model.nodes[0]!.support === undefined;
+    const freeRight = last === nSeg - 1 && model.nodes[nSeg]!.support === undefined;
+    let reference: number;
+    if (freeLeft) {
+      reference = first;
+      startV[first] = basis.fy[0]!;
+      startM[first] = -basis.mz[0]!;
+    } else if (freeRight) {
+      reference = last;
+      const j = pointAt(nSeg);
+      const Vend = -basis.fy[j]!;
+      const Mend = basis.mz[j]!;
+      startV[last] = Vend - particular[4 * last]!;
+      startM[last] = Mend - startV[last]! * lengths[last]! - particular[4 * last + 1]!;
+    } else {
+      reference = first;
+      for (let e = first + 1; e <= last; e++) {
+        const flexible = (s: number) => sections[s]!.EI / lengths[s]! ** 3;
+        if (flexible(e) < flexible(reference)) reference = e;
+      }
+    }
+    for (let e = reference; e < last; e++) forward(e);
+    for (let e = reference; e > first; e--) backward(e);
+    first = last + 1;
+  }
 }
 
 /**
