@@ -6,3 +6,4 @@ export * from "./aiscCb.js";
 export * from "./aiscCompactness.js";
 export * from "./aiscF2.js";
 export * from "./aiscG2.js";
+export * from "./steelBeamChecks.js";
