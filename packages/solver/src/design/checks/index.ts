@@ -7,3 +7,4 @@ export * from "./aiscCompactness.js";
 export * from "./aiscF2.js";
 export * from "./aiscG2.js";
 export * from "./steelBeamChecks.js";
+export * from "./resultStations.js";

@@ -6,10 +6,11 @@ const always = (...alternatives: Term[]): Slot => ({ alternatives, required: fal
 const needs = (...alternatives: Term[]): Slot => ({ alternatives, required: true });
 
 /**
- * ASCE/SEI 7-22 §2.3.1, basic combinations for strength design (LRFD), as we recall them: in
- * 7-22 the snow load S is a strength-level load, so it takes 1.0 where it leads, 0.3 as a
- * companion in place of 0.5, and 0.15 with earthquake. The snow factors are from memory and
- * must be verified against the standard. E stands for Eh + Ev taken together as one modelled case.
+ * ASCE/SEI 7-22 §2.3.1, basic combinations for strength design (LRFD). In 7-22 the snow load S
+ * is a strength-level (reliability-targeted) load: it takes 1.0 where it leads (Maguire et al.,
+ * "Ground Snow Loads for ASCE 7-22", STRUCTURE magazine, Feb. 2022). Its companion factors, 0.3
+ * in place of 0.5 and 0.15 with earthquake, are from memory and must be verified against the
+ * standard. E stands for Eh + Ev taken together as one modelled case.
  */
 export const ASCE7_22_STRENGTH: readonly CombinationTemplate[] = [
   { number: "1", expression: "1.4D", slots: [needs(t("dead", 1.4))] },
@@ -38,8 +39,10 @@ export const ASCE7_22_STRENGTH: readonly CombinationTemplate[] = [
 ];
 
 /**
- * ASCE/SEI 7-22 §2.4.1, basic combinations for allowable stress design, as we recall them:
- * W enters at 0.6, E at 0.7, and the strength-level snow load at 0.7 (from memory; verify).
+ * ASCE/SEI 7-22 §2.4.1, basic combinations for allowable stress design: W enters at 0.6, E at
+ * 0.7, and the strength-level snow load at 0.7 (the 0.7S in combinations 3, 4 and 6a is quoted in
+ * "ASCE 7-22 Flat Roof Snow Load versus Minimum Snow Load", STRUCTURE magazine; the 0.75(0.7S)
+ * in 6b by analogy, from memory). Tornado loads WT (new in 7-22) have no load category here.
  */
 export const ASCE7_22_ALLOWABLE: readonly CombinationTemplate[] = [
   { number: "1", expression: "D", slots: [needs(t("dead", 1.0))] },

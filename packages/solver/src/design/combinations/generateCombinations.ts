@@ -33,7 +33,7 @@ function presetTemplates(presetId: CombinationPresetId, options: GenerateOptions
         prefix: "LRFD",
         notes: [
           ASCE7_LIVE_EXCEPTION_NOTE,
-          "In ASCE/SEI 7-22 snow is a strength-level load (factors 1.0 leading, 0.3 companion, 0.15 with E; from memory, verify).",
+          "In ASCE/SEI 7-22 snow is a strength-level load: 1.0 where it leads; the companion factors 0.3 and 0.15 (with E) are from memory, verify.",
           "Wind and earthquake cases act as modelled: model each direction as its own case; each yields its own combination.",
         ],
       };
@@ -42,7 +42,7 @@ function presetTemplates(presetId: CombinationPresetId, options: GenerateOptions
         templates: ASCE7_22_ALLOWABLE,
         prefix: "ASD",
         notes: [
-          "ASD factors 0.6W, 0.7E and 0.7S for the strength-level loads of ASCE/SEI 7-22 (snow factor from memory, verify).",
+          "ASD factors 0.6W, 0.7E and 0.7S (strength-level snow in ASCE/SEI 7-22); verify against the standard.",
           "Wind and earthquake cases act as modelled: model each direction as its own case; each yields its own combination.",
         ],
       };
