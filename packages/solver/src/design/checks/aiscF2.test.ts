@@ -98,3 +98,10 @@ describe("compactness, AISC 360-22 Table B4.1b", () => {
     if (r.status === "not-covered") expect(r.reason).toMatch(/web is slender/);
   });
 });
+
+describe("tabulated properties", () => {
+  it("override the plate-derived ones, and undefined entries are ignored", () => {
+    const r = checkAiscF2Flexure({ shape: W18X50, properties: { ...TABLE, J: undefined }, Fy, E, Lb: 0, Cb: 1, method: "LRFD", Mr: 1 });
+    expect(r.status !== "not-covered" && r.capacity / KIP_FOOT).toBeCloseTo(378.75, 1);
+  });
+});

@@ -64,7 +64,8 @@ const LIMIT_STATE_CLAUSE: Record<F2LimitState, string> = {
 /** Flexure of a doubly symmetric compact I-shape by AISC 360-22 §F2; other classes are "not covered". */
 export function checkAiscF2Flexure(input: F2CheckInput): CheckResult {
   const E = input.E ?? E_STEEL;
-  const p = { ...iShapeLtbProperties(input.shape), ...input.properties };
+  const overrides = Object.fromEntries(Object.entries(input.properties ?? {}).filter(([, v]) => v !== undefined));
+  const p: IShapeLtbProperties = { ...iShapeLtbProperties(input.shape), ...overrides };
   const flange = flangeClass(p.bf, p.tf, E, input.Fy);
   const web = webClass(p.h, p.tw, E, input.Fy);
   const inputs: CheckInput[] = [

@@ -80,7 +80,7 @@ export function steelBeamChecks(input: SteelBeamCheckInput): SpanCheckRow[] {
       if (inSpan.length === 0) continue;
       const Vr = Math.max(...inSpan.map((s) => Math.abs(s.V)));
       const check = checkAiscG2Shear({
-        d: shape.d, tw: shape.tw, h: shape.d - 2 * shape.tf, Fy: input.Fy, E: input.E, Vr, method: input.method,
+        d: shape.d, tw: shape.tw, h: input.properties?.h ?? shape.d - 2 * shape.tf, Fy: input.Fy, E: input.E, Vr, method: input.method,
         fabrication: input.fabrication ?? "rolled",
       });
       rows.push({ span: span.label, caseId: combo.id, x1: span.x1, x2: span.x2, check });

@@ -65,7 +65,7 @@ export function createCustomMaterial(input: CustomMaterialInput): DesignResult<M
   });
 }
 
-/** Copies a preset into an editable project material; edits clear nothing but the id and name. */
+/** Copies a preset into an editable project material under a new id; values and the typical flag are kept. */
 export function materialFromPreset(preset: Material, id: string, name?: string): Material {
   return { ...preset, id, name: name ?? preset.name };
 }
