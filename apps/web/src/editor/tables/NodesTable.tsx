@@ -1,0 +1,83 @@
+import { deleteNode, moveNode, setSupport, toggleHinge } from "../commands/nodeCommands";
+import type { Support, SupportType } from "../model/BeamDocument";
+import { supportTypes } from "../model/BeamDocument";
+import { QuantityInput } from "../fields/QuantityInput";
+import { useEditor, useEditorStore } from "../store/useEditor";
+import { defaultSupport } from "../tools/placeSupport/placeSupportTool";
+import { navigateGrid, tableClasses as c } from "./gridNavigation";
+
+const supportLabels: Record<SupportType | "none", string> = { none: "none", pinned: "pinned", fixed: "fixed", guided: "guided", spring: "spring" };
+
+export function NodesTable() {
+  const store = useEditorStore();
+  const doc = useEditor((s) => s.history.doc);
+  const selection = useEditor((s) => s.ui.selection);
+  const units = doc.units;
+  const setSpring = (nodeId: (typeof doc.nodes)[number]["id"], support: Support | null, patch: { ky?: number | undefined; kr?: number | undefined }) => {
+    const base = support?.type === "spring" ? support : { type: "spring" as const };
+    const next: Record<string, unknown> = { ...base, ...patch };
+    for (const k of ["ky", "kr"]) if (next[k] === undefined) delete next[k];
+    return store.run((d) => setSupport(d, { nodeId, support: next as Support }));
+  };
+  return (
+    <table className={c.table} onKeyDown={navigateGrid}>
+      <thead className={c.head}>
+        <tr>
+          <th className={c.th}>Node</th>
+          <th className={c.th}>x</th>
+          <th className={c.th}>Support</th>
+          <th className={c.th}>Spring ky</th>
+          <th className={c.th}>Spring kr</th>
+          <th className={c.th}>Hinge</th>
+          <th className={c.th}><span className="sr-only">Actions</span></th>
+        </tr>
+      </thead>
+      <tbody>
+        {doc.nodes.map((n, i) => {
+          const isSpring = n.support?.type === "spring";
+          return (
+            <tr key={n.id} className={c.row(selection?.kind === "node" && selection.id === n.id)} onFocus={() => store.setUi({ selection: { kind: "node", id: n.id } })}>
+              <td className={`${c.td} text-paper-600`}>{i + 1}</td>
+              <td className={c.td}>
+                <QuantityInput label={`Node ${i + 1} x`} value={n.x} kind="position" units={units} onCommit={(x) => store.run((d) => moveNode(d, { nodeId: n.id, x }))} />
+              </td>
+              <td className={c.td}>
+                <select
+                  aria-label={`Node ${i + 1} support`}
+                  className={c.select}
+                  value={n.support?.type ?? "none"}
+                  onChange={(e) => {
+                    const type = e.target.value as SupportType | "none";
+                    store.run((d) => setSupport(d, { nodeId: n.id, support: type === "none" ? null : defaultSupport(type) }));
+                  }}
+                >
+                  {(["none", ...supportTypes] as const).map((t) => (
+                    <option key={t} value={t}>{supportLabels[t]}</option>
+                  ))}
+                </select>
+              </td>
+              <td className={c.td}>
+                {isSpring && n.support?.type === "spring" ? (
+                  <QuantityInput label={`Node ${i + 1} ky`} value={n.support.ky} kind="springK" units={units} onCommit={(ky) => setSpring(n.id, n.support, { ky })} onClear={() => setSpring(n.id, n.support, { ky: undefined })} />
+                ) : null}
+              </td>
+              <td className={c.td}>
+                {isSpring && n.support?.type === "spring" ? (
+                  <QuantityInput label={`Node ${i + 1} kr`} value={n.support.kr} kind="springKr" units={units} onCommit={(kr) => setSpring(n.id, n.support, { kr })} onClear={() => setSpring(n.id, n.support, { kr: undefined })} />
+                ) : null}
+              </td>
+              <td className={`${c.td} text-center`}>
+                <input type="checkbox" aria-label={`Node ${i + 1} hinge`} checked={n.hinge} onChange={() => store.run((d) => toggleHinge(d, { nodeId: n.id }))} />
+              </td>
+              <td className={c.td}>
+                <button type="button" className={c.smallButton} aria-label={`Delete node ${i + 1}`} onClick={() => store.run((d) => deleteNode(d, { nodeId: n.id }))} disabled={doc.nodes.length <= 2}>
+                  Delete
+                </button>
+              </td>
+            </tr>
+          );
+        })}
+      </tbody>
+    </table>
+  );
+}
