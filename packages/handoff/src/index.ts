@@ -7,3 +7,4 @@ export * from "./spans.js";
 export * from "./modelDiff.js";
 export * from "./modelDiffSummary.js";
 export * from "./compare.js";
+export { CAUTION, diagramStations, renderCalculationReport, type CalculationReportInput } from "./pdfReport.js";

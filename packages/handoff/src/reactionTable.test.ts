@@ -1,3 +1,4 @@
+import { solve } from "@spanwright/solver";
 import { describe, expect, it } from "vitest";
 import { buildReactionTable, describeRow, ReactionTableError, supportsWithUplift, type ReactionRow } from "./reactionTable.js";
 import { response, twoSpanModel, twoSpanResult } from "./testing/twoSpanBeam.js";
@@ -20,6 +21,24 @@ describe("the two-span fixture itself", () => {
     const peak = Math.min(...Array.from({ length: 601 }, (_, i) => response(-w, -w, i / 100).uy));
     // The handbook coefficient 1/185 is rounded (exactly 0.00542), so compare to 1 %.
     expect(peak / ((-w * 6 ** 4) / (185 * 2.0e11 * 8.0e-5))).toBeCloseTo(1, 2);
+  });
+
+
+  it("agrees with the solver on reactions, envelopes and stations", () => {
+    const m = { ...model, stations: [0, 1.5, 4.2, 6, 7.3, 12] };
+    const solved = solve(m);
+    const closed = twoSpanResult(m, m.stations);
+    const near = (a: number, b: number) => expect(Math.abs(a - b)).toBeLessThanOrEqual(1e-9 * 1e5);
+    for (const id of ["D", "L", "W", "C1", "C2"]) {
+      solved.results[id]!.reactions.forEach((r, i) => near(r.fy, closed.results[id]!.reactions[i]!.fy));
+      solved.results[id]!.stations!.forEach((s, i) => near(s.M, closed.results[id]!.stations![i]!.M));
+    }
+    for (const id of ["C1", "C2", "*"]) {
+      solved.envelopes[id]!.reactions.forEach((r, i) => {
+        near(r.fyMax, closed.envelopes[id]!.reactions[i]!.fyMax);
+        near(r.fyMin, closed.envelopes[id]!.reactions[i]!.fyMin);
+      });
+    }
   });
 });
 

@@ -27,12 +27,15 @@ interface Response {
   rz: number;
 }
 
-/** Span 1 alone under w = 1 N/m downward. */
-function spanOneUnit(x: number): Response {
+/**
+ * Span 1 alone under w = 1 N/m downward. At x = L the contract reports the value just right of
+ * the support; `leftAtSupport` gives the value just left, which the mirror image needs.
+ */
+function spanOneUnit(x: number, leftAtSupport = false): Response {
   const L = SPAN;
   const A = (7 * L) / 16;
   const C = -L / 16;
-  if (x < L) {
+  if (x < L || (leftAtSupport && x === L)) {
     return {
       V: A - x,
       M: A * x - (x * x) / 2,
@@ -48,7 +51,7 @@ function spanOneUnit(x: number): Response {
 /** Response to qy1 on span 1 and qy2 on span 2 (N/m, positive upward as in the contract). */
 export function response(qy1: number, qy2: number, x: number): Response {
   const a = spanOneUnit(x);
-  const b = spanOneUnit(2 * SPAN - x);
+  const b = spanOneUnit(2 * SPAN - x, true);
   const w1 = -qy1;
   const w2 = -qy2;
   // The mirror image of a span-2 load: V and rz change sign, M and uy do not.
