@@ -7,6 +7,7 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { solve } from "./index";
 import { beamShapeArb, loadsArb, stationsArb, toModel, type BeamShape } from "./testing/arbitraries";
+import { combinedScale, quantityScale } from "./testing/scales";
 import { caseResult, expectClose, stationAt, type BeamModel, type LoadSpec, type SolveOutput } from "./testing/exchange";
 
 const RUNS = 120;
@@ -18,6 +19,9 @@ function interiorPoint(shape: BeamShape, t: number): number {
   const x = x0 + t * (x1 - x0);
   return shape.nodes.some((n) => Math.abs(n.x - x) < 1e-6) ? x + 1e-3 : x;
 }
+
+/** Property runs are CPU-bound; the machine is shared, so allow well beyond the usual time. */
+const TIMEOUT = 60_000;
 
 describe("Maxwell–Betti reciprocity", () => {
   it("deflection at i from a unit load at j equals deflection at j from a unit load at i, and uy(j | moment at i) = rz(i | force at j)", () => {
@@ -48,7 +52,7 @@ describe("Maxwell–Betti reciprocity", () => {
       }),
       { numRuns: RUNS },
     );
-  });
+  }, TIMEOUT);
 });
 
 /** The same beam with segment `seg` split at fraction t by an unsupported, unhinged node. */
@@ -77,7 +81,9 @@ describe("segment subdivision", () => {
         loads: loadsArb(shape.nodes, { allowSettlement: true }, 6),
         stations: stationsArb(shape.nodes, 10),
         seg: fc.integer({ min: 0, max: shape.segments.length - 1 }),
-        t: fc.integer({ min: 1, max: 19 }).map((k) => k / 20 + 1 / 97),
+        // The new pieces stay ≥ 1/4 of the segment: slivers a few mm long next to soft springs push
+        // the stiffness ratio past 1e8, where no double-precision solve keeps 1e-9 (conditioning).
+        t: fc.integer({ min: 5, max: 14 }).map((k) => k / 20 + 1 / 97),
       }),
     );
     fc.assert(
@@ -87,12 +93,14 @@ describe("segment subdivision", () => {
         const r0 = caseResult(solve(model) as SolveOutput, "A");
         const r1 = caseResult(solve(split.model) as SolveOutput, "A");
         const oldToNew = (i: number) => (i >= split.newIndex ? i + 1 : i);
+        // The finer model has the stiffer short segments, so its noise scale governs.
+        const ps = combinedScale(split.model, [[loads, 1]]);
         for (const key of ["V", "M", "uy", "rz"] as const) {
-          const scale = r0.stations.reduce((m, s) => Math.max(m, Math.abs(s[key])), 0);
+          const scale = quantityScale(key, [...r0.stations, ...r1.stations], ps);
           r0.stations.forEach((s, i) => expectClose(r1.stations[i]![key], s[key], scale));
         }
-        const fScale = r0.reactions.reduce((m, q) => Math.max(m, Math.abs(q.fy)), 0);
-        const mScale = r0.reactions.reduce((m, q) => Math.max(m, Math.abs(q.mz)), 0) + fScale;
+        const fScale = Math.max(ps.force, r0.reactions.reduce((m, q) => Math.max(m, Math.abs(q.fy)), 0));
+        const mScale = Math.max(ps.moment, r0.reactions.reduce((m, q) => Math.max(m, Math.abs(q.mz)), 0) + fScale);
         for (const q of r0.reactions) {
           const q1 = r1.reactions.find((r) => r.node === oldToNew(q.node));
           expect(q1, `reaction of node ${q.node}`).toBeDefined();
@@ -100,11 +108,12 @@ describe("segment subdivision", () => {
           expectClose(q1!.mz, q.mz, mScale);
         }
         for (const k of ["Mmax", "Mmin", "Vmax", "Vmin", "uyMax", "uyMin"] as const) {
-          const scale = Math.max(Math.abs(r0.extremes[k].value), ...r0.stations.map((s) => Math.abs(k[0] === "M" ? s.M : k[0] === "V" ? s.V : s.uy)));
+          const key = k.startsWith("M") ? "M" : k.startsWith("V") ? "V" : "uy";
+          const scale = Math.max(Math.abs(r0.extremes[k].value), quantityScale(key, [...r0.stations, ...r1.stations], ps));
           expectClose(r1.extremes[k].value, r0.extremes[k].value, scale);
         }
       }),
       { numRuns: RUNS },
     );
-  });
+  }, TIMEOUT);
 });

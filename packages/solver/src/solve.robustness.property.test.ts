@@ -34,14 +34,17 @@ function describeInput(input: unknown): string {
   }
 }
 
+/** Property runs are CPU-bound; the machine is shared, so allow well beyond the usual time. */
+const TIMEOUT = 60_000;
+
 describe("solve on arbitrary input", () => {
   it("throws only SolverError for any JavaScript value", () => {
     fc.assert(fc.property(fc.anything({ withNullPrototype: true, withBigInt: true, withDate: true, withMap: true, withSet: true }), expectResultOrSolverError), { numRuns: 2000 });
-  });
+  }, TIMEOUT);
 
   it("throws only SolverError for any JSON value", () => {
     fc.assert(fc.property(fc.jsonValue(), expectResultOrSolverError), { numRuns: 2000 });
-  });
+  }, TIMEOUT);
 
   it("throws only SolverError for a valid model with one value replaced or removed", () => {
     const validModel = beamShapeArb().chain((shape) =>
@@ -63,7 +66,7 @@ describe("solve on arbitrary input", () => {
       }),
       { numRuns: 1500 },
     );
-  });
+  }, TIMEOUT);
 });
 
 type Key = string | number;
