@@ -1,5 +1,5 @@
 import { useState, type FormEvent } from "react";
-import { inviteMemberRequestSchema } from "@spanwright/contracts";
+import { inviteMemberRequestSchema, type Member } from "@spanwright/contracts";
 import { isApiError, type FieldErrors } from "../../api/client";
 import { useInviteMember } from "../../api/members";
 import { Alert } from "../../components/Alert";
@@ -16,7 +16,7 @@ const fields = ["email", "role"] as const;
 export function InviteMemberForm({ projectId }: { projectId: string }) {
   const invite = useInviteMember(projectId);
   const [clientErrors, setClientErrors] = useState<FieldErrors>({});
-  const [invited, setInvited] = useState<string | null>(null);
+  const [invited, setInvited] = useState<Member | null>(null);
 
   function handleSubmit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();
@@ -31,7 +31,7 @@ export function InviteMemberForm({ projectId }: { projectId: string }) {
     setClientErrors({});
     invite.mutate(result.data, {
       onSuccess: (member) => {
-        setInvited(member.email);
+        setInvited(member);
         form.reset();
       },
     });
@@ -52,7 +52,11 @@ export function InviteMemberForm({ projectId }: { projectId: string }) {
         </Alert>
       )}
       {invited !== null && (
-        <Alert tone="success">{`${invited} was added. They can sign in with that e-mail to open the project.`}</Alert>
+        <Alert tone="success">
+          {invited.pending
+            ? `${invited.email} was added. They will see the project once they create an account with that e-mail.`
+            : `${invited.name} was added and can open the project now.`}
+        </Alert>
       )}
       <div className="grid gap-3 sm:grid-cols-[minmax(0,3fr)_minmax(0,2fr)_auto] sm:items-start">
         <TextField label="E-mail" name="email" type="email" autoComplete="off" error={errors.email} />
