@@ -32,10 +32,3 @@ export default async function setup(project: TestProject): Promise<() => Promise
     await admin.end();
   };
 }
-
-declare module "vitest" {
-  export interface ProvidedContext {
-    templateDatabase: string;
-    databasePrefix: string;
-  }
-}

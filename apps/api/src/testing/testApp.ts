@@ -68,3 +68,11 @@ export async function createTestApp(options: { env?: Record<string, string>; eng
     },
   };
 }
+
+/** What the global setup (globalSetup.ts) hands to each test file. */
+declare module "vitest" {
+  export interface ProvidedContext {
+    templateDatabase: string;
+    databasePrefix: string;
+  }
+}
