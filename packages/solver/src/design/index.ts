@@ -12,3 +12,4 @@ export * from "./combinations/index.js";
 export * from "./checks/index.js";
 export * from "./profile/sectionProfile.js";
 export * from "./shear/shearShare.js";
+export * from "./segmentProperties.js";
