@@ -15,7 +15,7 @@ export function AppShell({ user }: { user: User }) {
       >
         Skip to content
       </a>
-      <header className="bg-ink-900 text-paper-50">
+      <header className="on-dark bg-ink-900 text-paper-50">
         <div className="mx-auto flex h-14 max-w-7xl items-center gap-6 px-6">
           <Link to="/projects" aria-label="Spanwright, your projects" className="rounded-md">
             <Wordmark tone="light" />
@@ -35,7 +35,7 @@ export function AppShell({ user }: { user: User }) {
         </div>
         <div
           aria-hidden="true"
-          className={`h-0.5 bg-ochre-400 transition-opacity ${navigation.state === "idle" ? "opacity-0" : "animate-pulse opacity-100"}`}
+          className={`h-0.5 bg-ochre-400 transition-opacity ${navigation.state === "idle" ? "opacity-0" : "opacity-100 motion-safe:animate-pulse"}`}
         />
       </header>
       <main id="main" className="mx-auto w-full max-w-7xl flex-1 px-6 py-8">

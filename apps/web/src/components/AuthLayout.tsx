@@ -6,7 +6,7 @@ import { Wordmark } from "./Logo";
 export function AuthLayout({ title, children, footer }: { title: string; children: ReactNode; footer: ReactNode }) {
   return (
     <div className="grid min-h-screen lg:grid-cols-[minmax(0,5fr)_minmax(0,4fr)]">
-      <aside className="hidden flex-col justify-between bg-ink-900 p-12 text-paper-100 lg:flex">
+      <aside className="on-dark hidden flex-col justify-between bg-ink-900 p-12 text-paper-100 lg:flex">
         <Wordmark tone="light" />
         <div className="max-w-md">
           <p className="text-3xl font-semibold leading-tight text-paper-50">

@@ -7,7 +7,7 @@ export function Loading({ label = "Loading…" }: { label?: string }) {
     <div role="status" className="flex items-center gap-3 py-6 text-sm text-paper-600">
       <span
         aria-hidden="true"
-        className="inline-block size-4 animate-spin rounded-full border-2 border-paper-300 border-t-ink-600"
+        className="inline-block size-4 motion-safe:animate-spin rounded-full border-2 border-paper-300 border-t-ink-600"
       />
       {label}
     </div>

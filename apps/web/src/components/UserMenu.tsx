@@ -54,7 +54,7 @@ export function UserMenu({ user }: { user: User }) {
       {open && (
         <div
           id={panelId}
-          className="absolute right-0 z-20 mt-2 w-64 rounded-lg border border-paper-300 bg-white p-2 text-ink-900 shadow-card"
+          className="on-light absolute right-0 z-20 mt-2 w-64 rounded-lg border border-paper-300 bg-white p-2 text-ink-900 shadow-card"
         >
           <div className="px-3 py-2">
             <p className="text-sm font-semibold">{user.name}</p>
