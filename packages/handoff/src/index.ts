@@ -8,3 +8,14 @@ export * from "./modelDiff.js";
 export * from "./modelDiffSummary.js";
 export * from "./compare.js";
 export { CAUTION, diagramStations, renderCalculationReport, type CalculationReportInput } from "./pdfReport.js";
+export {
+  sendHandoffMail,
+  handoffSubject,
+  handoffText,
+  HandoffMailError,
+  type HandoffMail,
+  type HandoffAttachment,
+  type HandoffMailErrorCode,
+  type SentHandoff,
+  type SmtpOptions,
+} from "./mail.js";
