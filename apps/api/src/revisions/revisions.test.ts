@@ -1,4 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { eq } from "drizzle-orm";
+import { beamRevisions } from "../db/schema.js";
 import { createTestApp, invalidModel, twoSpanModel, type TestApp } from "../testing/index.js";
 
 let t: TestApp;
@@ -86,5 +88,16 @@ describe("revisions", () => {
     const res = await owner.client.post(base, { model: twoSpanModel() });
     expect(res.status).toBe(400);
     expect(res.body.error.message).toContain("baseVersion");
+  });
+
+  it("is guarded by the database too: a saved model and a checked revision cannot be updated", async () => {
+    const { checker, base } = await beamWithTeam();
+    const { db } = t.database;
+    const beamId = base.split("/")[5]!;
+    const where = eq(beamRevisions.beamId, beamId);
+    await expect(db.update(beamRevisions).set({ model: { tampered: true } }).where(where)).rejects.toThrow();
+    await checker.client.post(`${base}/1/check`, { comment: "fine" });
+    await expect(db.update(beamRevisions).set({ checkComment: "rewritten" }).where(where)).rejects.toThrow();
+    await expect(db.update(beamRevisions).set({ status: "draft", checkedById: null, checkedAt: null }).where(where)).rejects.toThrow();
   });
 });
