@@ -1,0 +1,45 @@
+import { useMemo } from "react";
+import { Layer, Line, Stage } from "react-konva";
+import type { Analysis } from "@spanwright/solver";
+import type { Camera } from "../geometry/camera";
+import { screenToWorldX, worldToScreenX } from "../geometry/camera";
+import type { UnitSystemId } from "../units/unitSystems";
+import { DiagramRow, ROW_HEIGHT } from "./DiagramRow";
+import { quantities, seriesFor } from "./resultSeries";
+
+export interface DiagramsStageProps {
+  readonly analysis: Analysis;
+  readonly name: string;
+  readonly isEnvelope: boolean;
+  readonly camera: Camera;
+  readonly width: number;
+  readonly units: UnitSystemId;
+  readonly hoverX: number | null;
+  readonly onHover: (x: number | null) => void;
+}
+
+/** V, M, deflection and rotation stacked under the beam, on the canvas's camera. */
+export function DiagramsStage({ analysis, name, isEnvelope, camera, width, units, hoverX, onHover }: DiagramsStageProps) {
+  const series = useMemo(() => quantities.map((q) => seriesFor(analysis, name, isEnvelope, q)), [analysis, name, isEnvelope]);
+  const height = ROW_HEIGHT * quantities.length;
+  return (
+    <Stage
+      width={width}
+      height={height}
+      onPointerMove={(e) => {
+        const pos = e.target.getStage()?.getPointerPosition();
+        if (pos) onHover(screenToWorldX(camera, pos.x));
+      }}
+      onPointerLeave={() => onHover(null)}
+    >
+      <Layer listening={false}>
+        {quantities.map((q, i) => (
+          <DiagramRow key={q} series={series[i] ?? null} quantity={q} top={i * ROW_HEIGHT} width={width} camera={camera} units={units} />
+        ))}
+      </Layer>
+      <Layer listening={false}>
+        {hoverX !== null && <Line points={[worldToScreenX(camera, hoverX), 0, worldToScreenX(camera, hoverX), height]} stroke="#8198bd" strokeWidth={1} dash={[3, 3]} />}
+      </Layer>
+    </Stage>
+  );
+}
