@@ -47,7 +47,8 @@ describe("SignInForm", () => {
     fireEvent.click(screen.getByRole("button", { name: "Sign in" }));
 
     expect(await screen.findByText("Too long for this server")).toBeTruthy();
-    expect(screen.queryByRole("alert", { name: /sign-in failed/i })).toBeNull();
+    // Every server issue has a field here, so no banner repeats it.
+    expect(screen.queryByRole("alert")).toBeNull();
   });
 
   it("says plainly when the e-mail and password do not match", async () => {
