@@ -23,5 +23,6 @@ export type { Analysis, AnalysisCase, AnalysisCombination, AnalysisNode, Curve }
 export type { Span } from "./loadGrid.js";
 export { valuesAt, diagram, extremes, locateInterval } from "./fieldQueries.js";
 export type { Quantity, Side, FieldValues, Extreme, Extremes, Diagram } from "./fieldQueries.js";
-export { envelopeAt, envelopeDiagram, envelopeExtremes, reactionEnvelope } from "./envelopeQueries.js";
+export { envelopeAt, envelopeDiagram, reactionEnvelope } from "./envelopeQueries.js";
+export { envelopeExtremes } from "./envelopeExtremes.js";
 export type { EnvelopeQuantity, EnvelopeValues, EnvelopeDiagram, ReactionEnvelope } from "./envelopeQueries.js";

@@ -110,8 +110,15 @@ export function findSpans(model: Pick<BeamModel, "nodes">): Span[] {
 
 /** The span holding x: a point exactly at a support belongs to the span on its right (or the last span). */
 export function spanOf(spans: readonly Span[], x: number): number {
-  for (let s = 0; s < spans.length - 1; s++) if (x < spans[s]!.x2) return s;
-  return spans.length - 1;
+  // Binary search for the first span whose end lies beyond x; the last span takes the right end.
+  let lo = 0;
+  let hi = spans.length - 1;
+  while (lo < hi) {
+    const mid = (lo + hi) >> 1;
+    if (x < spans[mid]!.x2) hi = mid;
+    else lo = mid + 1;
+  }
+  return lo;
 }
 
 function emptyBasis(grid: LoadGrid, caseIndex: number, span: number): BasisLoads {

@@ -1,10 +1,11 @@
 import { analyzeModel } from "./analyze.js";
 import type { Analysis, Curve } from "./analysisTypes.js";
-import { envelopeAt, envelopeExtremes, reactionEnvelope, type ReactionEnvelope } from "./envelopeQueries.js";
+import { prepareEnvelopeExtremes, envelopeExtremesOf, type EnvelopeExtremesContext } from "./envelopeExtremes.js";
+import { combineParts, envelopeFactorSets, evaluateCaseParts, reactionEnvelope, type ReactionEnvelope } from "./envelopeQueries.js";
 import { unwrap } from "./errors.js";
-import { curveExtremes, locateInterval, QUANTITY_LAYOUT, type Extremes } from "./fieldQueries.js";
+import { curveExtremes, locateInterval, type Extremes } from "./fieldQueries.js";
 import { evaluatePolynomial } from "./polynomial.js";
-import { COEFFICIENTS_PER_INTERVAL } from "./segmentField.js";
+import { COEFFICIENTS_PER_INTERVAL, M_OFFSET, RZ_OFFSET, UY_OFFSET, V_OFFSET } from "./segmentField.js";
 import { validateModel } from "./validateModel.js";
 
 export interface ReactionRow {
@@ -71,23 +72,74 @@ function caseResult(analysis: Analysis, curve: Curve): CaseResult {
       const k = stationInterval(analysis, x);
       const u = x - grid[k]!;
       const o = k * COEFFICIENTS_PER_INTERVAL;
-      const at = (q: "V" | "M" | "uy" | "rz") => evaluatePolynomial(curve.coef, o + QUANTITY_LAYOUT[q].offset, QUANTITY_LAYOUT[q].degree, u);
-      return { x, V: at("V"), M: at("M"), uy: at("uy"), rz: at("rz") };
+      const c = curve.coef;
+      return {
+        x,
+        V: evaluatePolynomial(c, o + V_OFFSET, 2, u),
+        M: evaluatePolynomial(c, o + M_OFFSET, 3, u),
+        uy: evaluatePolynomial(c, o + UY_OFFSET, 5, u),
+        rz: evaluatePolynomial(c, o + RZ_OFFSET, 4, u),
+      };
     }),
     extremes: curveExtremes(grid, curve),
   };
 }
 
-function envelopeResult(analysis: Analysis, id: string): EnvelopeResult {
-  const xEnd = analysis.grid[analysis.grid.length - 1]!;
-  return {
-    reactions: reactionEnvelope(analysis, id)!,
-    stations: analysis.stations.map((x) => {
-      const e = envelopeAt(analysis, id, x, x >= xEnd ? "left" : "right")!;
-      return { x, Mmax: e.Mmax, Mmin: e.Mmin, Vmax: e.Vmax, Vmin: e.Vmin, uyMax: e.uyMax, uyMin: e.uyMin };
-    }),
-    extremes: envelopeExtremes(analysis, id)!,
-  };
+/**
+ * Envelope station rows for several ids at once: the case parts at each station are evaluated
+ * once and shared by every combination (and "*").
+ */
+function envelopeStations(analysis: Analysis, ids: string[]): EnvelopeStationRow[][] {
+  const grid = analysis.grid;
+  const xEnd = grid[grid.length - 1]!;
+  const sets = ids.map((id) => envelopeFactorSets(analysis, id)!);
+  const rows: EnvelopeStationRow[][] = ids.map(() => []);
+  const parts = { V: new Float64Array(3 * analysis.cases.length), M: new Float64Array(3 * analysis.cases.length), uy: new Float64Array(3 * analysis.cases.length) };
+  for (const x of analysis.stations) {
+    const k = locateInterval(grid, x, x >= xEnd ? "left" : "right");
+    const u = x - grid[k]!;
+    evaluateCaseParts(analysis, k, u, "V", parts.V);
+    evaluateCaseParts(analysis, k, u, "M", parts.M);
+    evaluateCaseParts(analysis, k, u, "uy", parts.uy);
+    sets.forEach((factorSets, i) => {
+      const row = { x, Mmax: -Infinity, Mmin: Infinity, Vmax: -Infinity, Vmin: Infinity, uyMax: -Infinity, uyMin: Infinity };
+      for (const factors of factorSets) {
+        const [Vmax, Vmin] = combineParts(analysis, factors, parts.V);
+        const [Mmax, Mmin] = combineParts(analysis, factors, parts.M);
+        const [uyMax, uyMin] = combineParts(analysis, factors, parts.uy);
+        row.Vmax = Math.max(row.Vmax, Vmax);
+        row.Vmin = Math.min(row.Vmin, Vmin);
+        row.Mmax = Math.max(row.Mmax, Mmax);
+        row.Mmin = Math.min(row.Mmin, Mmin);
+        row.uyMax = Math.max(row.uyMax, uyMax);
+        row.uyMin = Math.min(row.uyMin, uyMin);
+      }
+      rows[i]!.push(row);
+    });
+  }
+  return rows;
+}
+
+function envelopeResults(analysis: Analysis, ids: string[]): Record<string, EnvelopeResult> {
+  const context: EnvelopeExtremesContext = prepareEnvelopeExtremes(analysis);
+  const stations = envelopeStations(analysis, ids);
+  const out: Record<string, EnvelopeResult> = {};
+  const perCombination = new Map<string, EnvelopeResult>();
+  ids.forEach((id, i) => {
+    const sets = envelopeFactorSets(analysis, id)!;
+    // "*" reuses the extremes of the combinations: the worst of the worst.
+    const extremes = id === "*" ? worstOf([...perCombination.values()].map((e) => e.extremes)) : envelopeExtremesOf(context, sets);
+    const result = { reactions: reactionEnvelope(analysis, id)!, stations: stations[i]!, extremes };
+    if (id !== "*") perCombination.set(id, result);
+    out[id] = result;
+  });
+  return out;
+}
+
+function worstOf(list: Extremes[]): Extremes {
+  const pick = (key: keyof Extremes, isMax: boolean) =>
+    list.reduce((best, e) => ((isMax ? e[key].value > best.value : e[key].value < best.value) ? e[key] : best), list[0]![key]);
+  return { Mmax: pick("Mmax", true), Mmin: pick("Mmin", false), Vmax: pick("Vmax", true), Vmin: pick("Vmin", false), uyMax: pick("uyMax", true), uyMin: pick("uyMin", false) };
 }
 
 /** Builds the exchange-format result from an analysis. */
@@ -95,10 +147,8 @@ export function buildSolveResult(analysis: Analysis): SolveResult {
   const results: Record<string, CaseResult> = {};
   for (const c of analysis.cases) results[c.id] = caseResult(analysis, c.curve);
   for (const c of analysis.combinations) results[c.id] = caseResult(analysis, c.curve);
-  const envelopes: Record<string, EnvelopeResult> = {};
-  for (const c of analysis.combinations) envelopes[c.id] = envelopeResult(analysis, c.id);
-  if (analysis.combinations.length > 0) envelopes["*"] = envelopeResult(analysis, "*");
-  return { format: "spanwright.result/1", results, envelopes };
+  const ids = analysis.combinations.length > 0 ? [...analysis.combinations.map((c) => c.id), "*"] : [];
+  return { format: "spanwright.result/1", results, envelopes: envelopeResults(analysis, ids) };
 }
 
 /**

@@ -1,0 +1,137 @@
+/**
+ * Benchmark (not a timed test): `pnpm bench` from the repository root. Prints median times for
+ * generated beams; the figures and targets are those of the engine's issue. Uses the clock, so
+ * it lives outside src/.
+ */
+import { LuDecomposition, Matrix } from "ml-matrix";
+import { analyze, envelopeAt, solve, valuesAt, type BeamModel, type BeamModelInput } from "../src/index.js";
+import { assembleStiffness, segmentSections } from "../src/assembleStiffness.js";
+import { factorBanded, getBanded, solveFactored } from "../src/bandedMatrix.js";
+import { numberDofs } from "../src/numberDofs.js";
+import { beamModelSchema } from "../src/beamModelSchema.js";
+
+const SPAN = 6;
+
+/** An invented continuous beam: n equal spans on pins, steel section, one load case per list entry. */
+function generateBeam(spans: number, cases: BeamModelInput["loadCases"] = [], extra: Partial<BeamModelInput> = {}): BeamModelInput {
+  return {
+    format: "spanwright.beam/1",
+    nodes: Array.from({ length: spans + 1 }, (_, i) => ({ x: i * SPAN, support: { type: "pinned" as const } })),
+    segments: Array.from({ length: spans }, () => ({ E: 2e11, I: 8e-5 })),
+    loadCases: cases,
+    ...extra,
+  };
+}
+
+function uniform(spans: number, q: number) {
+  return [{ type: "distributed" as const, x1: 0, x2: spans * SPAN, qy1: q, qy2: q }];
+}
+
+function median(samples: number[]): number {
+  const sorted = [...samples].sort((a, b) => a - b);
+  return sorted[Math.floor(sorted.length / 2)]!;
+}
+
+/** Median wall time in ms over `runs` runs after `warmup` unmeasured ones. */
+function time(run: () => unknown, runs: number, warmup = Math.max(3, Math.floor(runs / 5))): number {
+  for (let i = 0; i < warmup; i++) run();
+  const samples: number[] = [];
+  for (let i = 0; i < runs; i++) {
+    const start = performance.now();
+    run();
+    samples.push(performance.now() - start);
+  }
+  return median(samples);
+}
+
+const ms = (t: number) => `${t.toFixed(3)} ms`;
+
+function singleCase(): Record<number, number> {
+  const times: Record<number, number> = {};
+  for (const spans of [20, 200, 2000]) {
+    const model = generateBeam(spans, [{ id: "D", category: "dead", loads: uniform(spans, -10e3) }]);
+    times[spans] = time(() => solve(model), spans >= 2000 ? 15 : 50);
+    console.log(`one case, ${String(spans).padStart(4)} spans: solve ${ms(times[spans]!)} (median)`);
+  }
+  return times;
+}
+
+function interactiveModel(): BeamModelInput {
+  const spans = 20;
+  const length = spans * SPAN;
+  const point = (x: number, fy: number) => ({ type: "point" as const, x, fy });
+  const cases: BeamModelInput["loadCases"] = [
+    { id: "D", category: "dead", loads: [...uniform(spans, -12e3), point(15, -40e3), point(63, -25e3)] },
+    { id: "SD", category: "dead", loads: [{ type: "distributed", x1: 0, x2: length, qy1: -2e3, qy2: -4e3 }] },
+    { id: "L", category: "live", pattern: true, loads: uniform(spans, -15e3) },
+    { id: "Lr", category: "roof-live", pattern: true, loads: [...uniform(spans, -3e3), point(33, -8e3)] },
+    { id: "S", category: "snow", loads: uniform(spans, -4e3) },
+    { id: "W", category: "wind", loads: [{ type: "distributed", x1: 30, x2: 90, qy1: 5e3, qy2: 5e3 }, { type: "moment", x: 45, mz: 20e3 }] },
+  ];
+  const f = (D: number, rest: Record<string, number>) => ({ D, SD: D, ...rest });
+  const combinations = [
+    { id: "C1", factors: f(1.4, {}) },
+    { id: "C2", factors: f(1.2, { L: 1.6, Lr: 0.5 }) },
+    { id: "C3", factors: f(1.2, { L: 1.6, S: 0.5 }) },
+    { id: "C4", factors: f(1.2, { Lr: 1.6, L: 1.0 }) },
+    { id: "C5", factors: f(1.2, { S: 1.6, L: 1.0 }) },
+    { id: "C6", factors: f(1.2, { Lr: 1.6, W: 0.5 }) },
+    { id: "C7", factors: f(1.2, { W: 1.0, L: 1.0, Lr: 0.5 }) },
+    { id: "C8", factors: f(1.2, { W: 1.0, L: 1.0, S: 0.5 }) },
+    { id: "C9", factors: f(0.9, { W: 1.0 }) },
+    { id: "C10", factors: f(1.0, { L: 1.0, Lr: 1.0, S: 1.0 }) },
+  ];
+  const stations = Array.from({ length: spans * 100 }, (_, i) => (i * length) / (spans * 100));
+  return generateBeam(spans, cases, { combinations, stations });
+}
+
+function interactive(): { solveTime: number; editorTime: number } {
+  const input = interactiveModel();
+  const model: BeamModel = beamModelSchema.parse(input);
+  const solveTime = time(() => solve(input), 200);
+  // The editor's path per edit: analyse, then read every station of every result and envelope.
+  const ids = [...model.loadCases.map((c) => c.id), ...model.combinations.map((c) => c.id)];
+  const editorTime = time(() => {
+    const analysis = analyze(model);
+    let sink = 0;
+    for (const x of model.stations!) {
+      for (const id of ids) sink += valuesAt(analysis, id, x)!.M;
+      sink += envelopeAt(analysis, "*", x)!.Mmax;
+    }
+    return sink;
+  }, 200);
+  console.log(`interactive (20 spans, 6 cases, 10 combinations, 2 patterned, 100 stations/span):`);
+  console.log(`  solve() full result with exact envelope extremes: ${ms(solveTime)} (median of 200)`);
+  console.log(`  analyze() + all station values and "*" envelope (editor path): ${ms(editorTime)} (median of 200)`);
+  return { solveTime, editorTime };
+}
+
+function bandedVersusDense(): number {
+  const model = beamModelSchema.parse(generateBeam(500, [], { nodes: generateBeam(500).nodes.map((n, i) => (i === 0 || i === 500 ? n : { x: n.x, support: { type: "spring" as const, ky: 5e7 } })) }));
+  const dofs = numberDofs(model);
+  const { stiffness } = assembleStiffness(model, dofs, segmentSections(model));
+  const b = Float64Array.from({ length: dofs.count }, (_, i) => Math.sin(i));
+  const banded = time(() => {
+    const f = factorBanded(stiffness);
+    if (!f.ok) throw new Error("singular");
+    const x = Float64Array.from(b);
+    solveFactored(f.factors, x);
+    return x;
+  }, 50);
+  const dense = Matrix.zeros(dofs.count, dofs.count);
+  for (let i = 0; i < dofs.count; i++) for (let j = Math.max(0, i - dofs.halfBandwidth); j <= Math.min(dofs.count - 1, i + dofs.halfBandwidth); j++) dense.set(i, j, getBanded(stiffness, i, j));
+  const rhs = Matrix.columnVector(Array.from(b));
+  const lu = time(() => new LuDecomposition(dense).solve(rhs), 5, 1);
+  console.log(`500-span system (${dofs.count} DOFs, half-bandwidth ${dofs.halfBandwidth}): banded LDLT ${ms(banded)}, ml-matrix dense LU ${ms(lu)}, ratio ${(lu / banded).toFixed(0)}x`);
+  return lu / banded;
+}
+
+const single = singleCase();
+const growth = single[2000]! / single[200]!;
+console.log(`  t(2000)/t(200) = ${growth.toFixed(2)}`);
+const { solveTime, editorTime } = interactive();
+const ratio = bandedVersusDense();
+console.log("targets:");
+console.log(`  interactive < 2 ms median: solve ${solveTime < 2 ? "met" : "NOT met"} (${ms(solveTime)}), editor path ${editorTime < 2 ? "met" : "NOT met"} (${ms(editorTime)})`);
+console.log(`  2000 spans one case < 50 ms: ${single[2000]! < 50 ? "met" : "NOT met"}; t(2000)/t(200) <= 12: ${growth <= 12 ? "met" : "NOT met"}`);
+console.log(`  banded >= 100x faster than dense LU: ${ratio >= 100 ? "met" : "NOT met"}`);

@@ -1,0 +1,142 @@
+import type { Analysis } from "./analysisTypes.js";
+import { envelopeFactorSets, ENVELOPE_QUANTITIES, type EnvelopeQuantity, type FactorSet } from "./envelopeQueries.js";
+import { QUANTITY_LAYOUT, type Extreme, type Extremes } from "./fieldQueries.js";
+import { evaluatePolynomial, findSignChanges } from "./polynomial.js";
+import { COEFFICIENTS_PER_INTERVAL } from "./segmentField.js";
+
+/**
+ * A patterned case on one grid interval, split where any of its pieces changes sign: on each
+ * sub-interval the sum of its positive pieces and the sum of its negative pieces are plain
+ * polynomials (interval-local coordinate u), so every envelope is a polynomial there too.
+ */
+interface PatternSplit {
+  cuts: number[];
+  positive: Float64Array;
+  negative: Float64Array;
+}
+
+/** Work shared by every envelope id of one analysis: the sign splits of the patterned cases. */
+export interface EnvelopeExtremesContext {
+  analysis: Analysis;
+  /** splits[quantity][case][interval], null for a non-patterned case. */
+  splits: Record<EnvelopeQuantity, (PatternSplit[] | null)[]>;
+}
+
+export function prepareEnvelopeExtremes(analysis: Analysis): EnvelopeExtremesContext {
+  const grid = analysis.grid;
+  const splits = {} as EnvelopeExtremesContext["splits"];
+  for (const quantity of ENVELOPE_QUANTITIES) {
+    const { offset, degree } = QUANTITY_LAYOUT[quantity];
+    const n = degree + 1;
+    splits[quantity] = analysis.cases.map((loadCase) => {
+      if (!loadCase.pattern) return null;
+      const perInterval: PatternSplit[] = [];
+      for (let k = 0; k + 1 < grid.length; k++) {
+        const h = grid[k + 1]! - grid[k]!;
+        const o = k * COEFFICIENTS_PER_INTERVAL + offset;
+        const cuts = [0, h];
+        for (const piece of loadCase.pieces) cuts.push(...findSignChanges(piece.curve.coef, o, degree, 0, h));
+        cuts.sort((a, b) => a - b);
+        const subs = cuts.length - 1;
+        const positive = new Float64Array(subs * n);
+        const negative = new Float64Array(subs * n);
+        for (let s = 0; s < subs; s++) {
+          const mid = 0.5 * (cuts[s]! + cuts[s + 1]!);
+          for (const piece of loadCase.pieces) {
+            const v = evaluatePolynomial(piece.curve.coef, o, degree, mid);
+            const target = v > 0 ? positive : negative;
+            for (let i = 0; i < n; i++) target[s * n + i]! += piece.curve.coef[o + i]!;
+          }
+        }
+        perInterval.push({ cuts, positive, negative });
+      }
+      return perInterval;
+    });
+  }
+  return { analysis, splits };
+}
+
+class Tracker {
+  max: Extreme = { value: -Infinity, x: 0 };
+  min: Extreme = { value: Infinity, x: 0 };
+}
+
+/**
+ * Exact extremes of the upper (max) and lower (min) envelopes of a list of factored sums: on each
+ * sub-interval where no piece changes sign the envelopes are polynomials, whose extremes lie at
+ * the sub-interval ends or at sign changes of their derivatives.
+ */
+export function envelopeExtremesOf(context: EnvelopeExtremesContext, sets: FactorSet[]): Extremes {
+  const out = {} as Record<EnvelopeQuantity, Tracker>;
+  for (const quantity of ENVELOPE_QUANTITIES) {
+    const tracker = new Tracker();
+    for (const factors of sets) visitFactorSet(context, factors, quantity, tracker);
+    out[quantity] = tracker;
+  }
+  return { Mmax: out.M.max, Mmin: out.M.min, Vmax: out.V.max, Vmin: out.V.min, uyMax: out.uy.max, uyMin: out.uy.min };
+}
+
+/** Exact envelope extremes for a combination id, a load case id or "*" (undefined if unknown). */
+export function envelopeExtremes(analysis: Analysis, id: string): Extremes | undefined {
+  const sets = envelopeFactorSets(analysis, id);
+  return sets ? envelopeExtremesOf(prepareEnvelopeExtremes(analysis), sets) : undefined;
+}
+
+function visitFactorSet(context: EnvelopeExtremesContext, factors: FactorSet, quantity: EnvelopeQuantity, tracker: Tracker): void {
+  const { analysis } = context;
+  const grid = analysis.grid;
+  const { offset, degree } = QUANTITY_LAYOUT[quantity];
+  const n = degree + 1;
+  const fixed = factors.filter((f) => f.factor !== 0 && !analysis.cases[f.caseIndex]!.pattern);
+  const patterned = factors.filter((f) => f.factor !== 0 && analysis.cases[f.caseIndex]!.pattern);
+  const base = new Float64Array(n);
+  const upper = new Float64Array(n);
+  const lower = new Float64Array(n);
+  const derivative = new Float64Array(degree);
+  const cursor = new Int32Array(patterned.length);
+  const visit = (poly: Float64Array, a: number, b: number, x0: number, isUpper: boolean) => {
+    const consider = (u: number) => {
+      const v = evaluatePolynomial(poly, 0, degree, u);
+      if (isUpper ? v > tracker.max.value : v < tracker.min.value) {
+        if (isUpper) tracker.max = { value: v, x: x0 + u };
+        else tracker.min = { value: v, x: x0 + u };
+      }
+    };
+    consider(a);
+    for (let i = 1; i <= degree; i++) derivative[i - 1] = i * poly[i]!;
+    for (const u of findSignChanges(derivative, 0, degree - 1, a, b)) consider(u);
+    consider(b);
+  };
+  for (let k = 0; k + 1 < grid.length; k++) {
+    const o = k * COEFFICIENTS_PER_INTERVAL + offset;
+    base.fill(0);
+    for (const { caseIndex, factor } of fixed) {
+      const coef = analysis.cases[caseIndex]!.curve.coef;
+      for (let i = 0; i < n; i++) base[i]! += factor * coef[o + i]!;
+    }
+    const splits = patterned.map((f) => context.splits[quantity][f.caseIndex]![k]!);
+    const cuts = splits.length === 1 ? splits[0]!.cuts : [...new Set(splits.flatMap((s) => s.cuts))].sort((a, b) => a - b);
+    if (cuts.length === 0) cuts.push(0, grid[k + 1]! - grid[k]!);
+    cursor.fill(0);
+    for (let c = 0; c + 1 < cuts.length; c++) {
+      const a = cuts[c]!;
+      const b = cuts[c + 1]!;
+      if (!(b > a)) continue;
+      const mid = 0.5 * (a + b);
+      upper.set(base);
+      lower.set(base);
+      patterned.forEach(({ factor }, p) => {
+        const split = splits[p]!;
+        while (split.cuts[cursor[p]! + 1]! < mid) cursor[p]!++;
+        const s = cursor[p]! * n;
+        const [toUpper, toLower] = factor > 0 ? [split.positive, split.negative] : [split.negative, split.positive];
+        for (let i = 0; i < n; i++) {
+          upper[i]! += factor * toUpper[s + i]!;
+          lower[i]! += factor * toLower[s + i]!;
+        }
+      });
+      visit(upper, a, b, grid[k]!, true);
+      visit(lower, a, b, grid[k]!, false);
+    }
+  }
+}

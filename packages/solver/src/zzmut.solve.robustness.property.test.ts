@@ -1,0 +1,119 @@
+/**
+ * `solve(model: unknown)` is the boundary where untrusted JSON (files, HTTP bodies) enters the
+ * engine: whatever it is given, it either returns a result or throws a `SolverError` with one of
+ * the contract's codes, never a TypeError or RangeError from deeper in.
+ */
+import fc from "fast-check";
+import { describe, expect, it } from "vitest";
+import { SolverError, solve } from "./testing/zz-mutant";
+import { beamShapeArb, loadsArb, toModel } from "./testing/arbitraries";
+import { beam } from "./testing/exchange";
+
+/** Library calls have no size limit, so only these two codes may appear (exchange format). */
+const LIBRARY_CODES = ["invalid-model", "mechanism"];
+
+function expectResultOrSolverError(input: unknown): void {
+  let out: unknown;
+  try {
+    out = solve(input);
+  } catch (e) {
+    if (!(e instanceof SolverError)) expect.fail(`threw ${String(e)} for ${describeInput(input)}`);
+    expect(LIBRARY_CODES).toContain(e.code);
+    expect(typeof e.message).toBe("string");
+    expect(e.message.length).toBeGreaterThan(0);
+    return;
+  }
+  expect((out as { format?: unknown }).format).toBe("spanwright.result/1");
+}
+
+function describeInput(input: unknown): string {
+  try {
+    return String(JSON.stringify(input)).slice(0, 300);
+  } catch {
+    return String(input);
+  }
+}
+
+/** Property runs are CPU-bound; the machine is shared, so allow well beyond the usual time. */
+const TIMEOUT = 60_000;
+
+describe("solve on arbitrary input", () => {
+  it("throws only SolverError for any JavaScript value", () => {
+    fc.assert(fc.property(fc.anything({ withNullPrototype: true, withBigInt: true, withDate: true, withMap: true, withSet: true }), expectResultOrSolverError), { numRuns: 2000 });
+  }, TIMEOUT);
+
+  it("throws only SolverError for any JSON value", () => {
+    fc.assert(fc.property(fc.jsonValue(), expectResultOrSolverError), { numRuns: 2000 });
+  }, TIMEOUT);
+
+  it("throws only SolverError for a valid model with one value replaced or removed", () => {
+    const validModel = beamShapeArb().chain((shape) =>
+      loadsArb(shape.nodes, { allowSettlement: true }).map((loads) =>
+        toModel(shape, [{ id: "D", category: "dead", loads }, { id: "L", category: "live", pattern: true, loads: loads.filter((l) => l.type !== "settlement") }], {
+          combinations: [{ id: "C", factors: { D: 1.2, L: 1.6 } }],
+          stations: [shape.nodes[0]!.x],
+        }),
+      ),
+    );
+    const arb = fc.record({ model: validModel, pick: fc.nat(), replacement: fc.option(fc.jsonValue(), { nil: undefined }) });
+    fc.assert(
+      fc.property(arb, ({ model, pick, replacement }) => {
+        const copy = JSON.parse(JSON.stringify(model)) as unknown;
+        const paths = pathsOf(copy);
+        const path = paths[pick % paths.length]!;
+        setAt(copy, path, replacement);
+        expectResultOrSolverError(copy);
+      }),
+      { numRuns: 1500 },
+    );
+  }, TIMEOUT);
+});
+
+type Key = string | number;
+
+function pathsOf(value: unknown, prefix: Key[] = []): Key[][] {
+  if (value === null || typeof value !== "object") return [prefix];
+  const entries: [Key, unknown][] = Array.isArray(value) ? value.map((v, i) => [i, v]) : Object.entries(value);
+  return [prefix, ...entries.flatMap(([k, v]) => pathsOf(v, [...prefix, k]))].filter((p) => p.length > 0);
+}
+
+function setAt(root: unknown, path: Key[], replacement: unknown): void {
+  let target = root as Record<Key, unknown>;
+  for (const key of path.slice(0, -1)) target = target[key] as Record<Key, unknown>;
+  const last = path[path.length - 1]!;
+  if (replacement === undefined && !Array.isArray(target)) delete target[last];
+  else target[last] = replacement ?? null;
+}
+
+describe("error codes of the exchange format", () => {
+  it("invalid-model names the offending path", () => {
+    const model = beam([{ x: 0, support: { type: "pinned" } }, { x: 3 }, { x: 6 }, { x: 9, support: { type: "pinned" } }], [{ type: "point", x: 4, fy: -1000 }]);
+    model.segments[2] = { E: 2.0e11, I: -1.0e-4 };
+    expect(() => solve(model)).toThrow(SolverError);
+    try {
+      solve(model);
+    } catch (e) {
+      expect((e as SolverError).code).toBe("invalid-model");
+      expect((e as SolverError).where).toBe("segments[2].I");
+    }
+  });
+
+  it("mechanism names the free part of a beam that can swing about a hinge", () => {
+    // Two pins and a hinge between them: the two halves fold about the hinge at x = 4 m.
+    const model = beam([{ x: 0, support: { type: "pinned" } }, { x: 4, hinge: true }, { x: 10, support: { type: "pinned" } }], [{ type: "point", x: 2, fy: -1000 }]);
+    try {
+      solve(model);
+      expect.fail("a mechanism was solved");
+    } catch (e) {
+      expect(e).toBeInstanceOf(SolverError);
+      expect((e as SolverError).code).toBe("mechanism");
+      expect((e as SolverError).message).toMatch(/4/);
+      expect((e as SolverError).where.length).toBeGreaterThan(0);
+    }
+  });
+
+  it("mechanism is reported for a beam with a single pinned support", () => {
+    const model = beam([{ x: 0, support: { type: "pinned" } }, { x: 5 }], [{ type: "point", x: 5, fy: -1000 }]);
+    expect(() => solve(model)).toThrow(expect.objectContaining({ code: "mechanism" }));
+  });
+});
