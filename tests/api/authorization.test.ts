@@ -5,8 +5,8 @@ import { listExpressRoutes } from "./routeTable.js";
 
 /**
  * The authorisation matrix: every route of the contract's route table × every kind of caller.
- * Each case runs against a fresh project so a successful delete or role change cannot leak into
- * the next case.
+ * Each case that can change data runs against a fresh project, so a successful delete or role
+ * change cannot leak into the next case.
  */
 type Actor = Role | "outsider" | "anonymous";
 const actors: readonly Actor[] = ["owner", "engineer", "checker", "viewer", "outsider", "anonymous"];
@@ -105,6 +105,8 @@ let t: TestApp;
 const clients = {} as Record<Exclude<Actor, "anonymous">, Client>;
 const ids = {} as Record<Exclude<Actor, "anonymous"> | "extra", string>;
 let foreign: Fixture;
+/** Read-only routes share one project; every other case gets its own. */
+let shared: Fixture;
 
 async function createFixture(): Promise<Fixture> {
   const { projects, members, beams } = t.services;
@@ -131,6 +133,7 @@ beforeAll(async () => {
   const other = await t.services.projects.create(ids.outsider, { name: "Elsewhere", unitSystem: "si", compareThresholdPercent: 5 });
   const { beam } = await t.services.beams.create(ids.outsider, other.id, { name: "Foreign", model: twoSpanModel(), changeSummary: "" });
   foreign = { projectId: other.id, beamId: beam.id, extraUserId: ids.outsider };
+  shared = await createFixture();
 });
 afterAll(() => t.close());
 
@@ -165,7 +168,7 @@ describe("route table", () => {
 
 describe.each(guarded)("%s", (name) => {
   it.each(actors)("answers %s as the role rules say", async (actor) => {
-    const fixture = await createFixture();
+    const fixture = apiRoutes[name].method === "GET" ? shared : await createFixture();
     const res = await send(actor, name, calls[name](fixture));
     const expected = expectedStatus(name, actor);
     expect({ status: res.status, code: res.body?.error?.code }).toMatchObject({ status: expected });

@@ -41,4 +41,22 @@ describe("POST /api/solve", () => {
     expect(res.status).toBe(422);
     expect(res.body.error).toMatchObject({ code: "too-large", details: { where: "loadCases", limit: 50 } });
   });
+
+  it("answers an unexpected engine failure with a bare 500, no stack or message", async () => {
+    const broken = await createTestApp({
+      engine: {
+        solve: () => {
+          throw new TypeError("secret internals at engine.ts:42");
+        },
+      },
+    });
+    try {
+      const { client } = await broken.signUp("Unlucky");
+      const res = await client.post("/api/solve", twoSpanModel());
+      expect(res.status).toBe(500);
+      expect(res.body).toEqual({ error: { code: "internal", message: "something went wrong on the server" } });
+    } finally {
+      await broken.close();
+    }
+  });
 });
