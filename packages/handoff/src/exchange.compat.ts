@@ -2,11 +2,9 @@ import type { BeamModel as SolverModel, SolveResult as SolverResult } from "@spa
 import type { BeamModel, SolveResult } from "./exchange.js";
 
 /**
- * Compile-time check (typecheck only, no runtime code): the solver's model and result types fit
- * the shapes this package reads, so callers pass `solve` output straight in.
+ * Compile-time only: the solver's model and result types fit the shapes this package reads, so
+ * `solve` output goes straight in. If the solver's types drift from the contract, typecheck fails.
  */
-export type SolverModelFits = SolverModel extends BeamModel ? true : never;
-export type SolverResultFits = SolverResult extends SolveResult ? true : never;
-const modelFits: SolverModelFits = true;
-const resultFits: SolverResultFits = true;
-export const exchangeCompat = { modelFits, resultFits };
+type Assert<T extends true> = T;
+export type SolverModelFits = Assert<SolverModel extends BeamModel ? true : false>;
+export type SolverResultFits = Assert<SolverResult extends SolveResult ? true : false>;

@@ -1,6 +1,9 @@
 import type { BeamLoad, BeamModel, SupportSpec } from "./exchange.js";
 import { CONTENT_WIDTH, FONT, PAGE, pdfSafe, type Doc } from "./pdfLayout.js";
-import { formatShort, type UnitSystem } from "./units.js";
+import { formatShort, type Quantity, type UnitSystem } from "./units.js";
+
+// Four significant digits keep drawing labels short enough to sit beside their symbols.
+const formatShort4 = (u: UnitSystem, q: Quantity, si: number) => formatShort(u, q, si, 4);
 
 /**
  * Vector drawings for the calculation report: the beam to scale with simple support, hinge and
@@ -53,15 +56,15 @@ function arrow(doc: Doc, x: number, yTail: number, yHead: number): void {
 function loadLabel(caseId: string, load: BeamLoad, u: UnitSystem): string {
   switch (load.type) {
     case "point":
-      return `${caseId} ${formatShort(u, "force", load.fy)}`;
+      return `${caseId} ${formatShort4(u, "force", load.fy)}`;
     case "moment":
-      return `${caseId} ${formatShort(u, "moment", load.mz)}`;
+      return `${caseId} ${formatShort4(u, "moment", load.mz)}`;
     case "distributed":
       return load.qy1 === load.qy2
-        ? `${caseId} ${formatShort(u, "distributed", load.qy1)}`
-        : `${caseId} ${formatShort(u, "distributed", load.qy1)} to ${formatShort(u, "distributed", load.qy2)}`;
+        ? `${caseId} ${formatShort4(u, "distributed", load.qy1)}`
+        : `${caseId} ${formatShort4(u, "distributed", load.qy1)} to ${formatShort4(u, "distributed", load.qy2)}`;
     case "settlement":
-      return `${caseId} settlement ${formatShort(u, "deflection", load.uy)}`;
+      return `${caseId} settlement ${formatShort4(u, "deflection", load.uy)}`;
     default: {
       const never: never = load;
       return never;
@@ -134,8 +137,8 @@ export function drawBeam(doc: Doc, model: BeamModel, u: UnitSystem): void {
     doc.moveTo(x, dimY - 3).lineTo(x, dimY + 3).stroke();
     const next = model.nodes[i + 1];
     if (next) {
-      const label = formatShort(u, "length", next.x - node.x);
-      doc.text(pdfSafe(label), (x + px(next.x)) / 2 - 15, dimY + 3, { width: 30, align: "center", lineBreak: false });
+      const label = formatShort4(u, "length", next.x - node.x);
+      doc.text(pdfSafe(label), (x + px(next.x)) / 2 - 30, dimY + 3, { width: 60, align: "center", lineBreak: false });
     }
   });
   doc.x = PAGE.left;

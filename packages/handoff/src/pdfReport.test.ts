@@ -1,5 +1,6 @@
 import { solve } from "@spanwright/solver";
 import { beforeAll, describe, expect, it } from "vitest";
+import type { BeamModel } from "./exchange.js";
 import { CAUTION, diagramStations, renderCalculationReport, type CalculationReportInput } from "./pdfReport.js";
 import { extractPdfText } from "./testing/pdfText.js";
 import { twoSpanModel } from "./testing/twoSpanBeam.js";
@@ -85,6 +86,39 @@ describe("renderCalculationReport in US customary units", () => {
     expect(all).toContain("not checked");
     // 22.5 kN / 4.4482216152605 kN per kip = 5.06 kip (NIST SP 811 B.8).
     expect(all).toMatch(/S2 19\.685 D \(dead\) 5\.06/);
+  }, 30_000);
+});
+
+describe("renderCalculationReport for a beam without combinations", () => {
+  it("draws every support and load type and gives one diagram page per load case", async () => {
+    // Invented demo beam: fixed end, hinge, spring, overhang, every load type.
+    const varied: BeamModel = {
+      format: "spanwright.beam/1",
+      title: "Canopy edge beam",
+      nodes: [
+        { x: 0, support: { type: "fixed" } },
+        { x: 4, support: { type: "pinned" } },
+        { x: 6.5, hinge: true },
+        { x: 9, support: { type: "spring", ky: 5e7 } },
+        { x: 11 },
+      ],
+      segments: Array.from({ length: 4 }, () => ({ E: 2.0e11, I: 8.0e-5 })),
+      loadCases: [
+        { id: "D", category: "dead", loads: [
+          { type: "distributed", x1: 0, x2: 11, qy1: -2000, qy2: -2000 },
+          { type: "point", x: 10.5, fy: -5000 },
+          { type: "moment", x: 2, mz: 3000 },
+        ] },
+        { id: "Q", category: "live", pattern: true, loads: [{ type: "distributed", x1: 1, x2: 8, qy1: -1000, qy2: -4000 }] },
+        { id: "S1", category: "settlement", loads: [{ type: "settlement", node: 1, uy: -0.005 }] },
+      ],
+      combinations: [],
+    };
+    const pages = (await extractPdfText(await renderCalculationReport({ ...input, model: varied, result: solve(varied) }))).map(squash);
+    const all = pages.join(" ");
+    for (const text of ["fixed", "spring ky 50000 kN/m", "yes", "settlement", "-1 kN/m to -4 kN/m", "3 kN·m"]) expect(all).toContain(text);
+    expect(pages.filter((p) => p.includes("Diagrams: Load case"))).toHaveLength(3);
+    pages.forEach((page) => expect(page).toContain(CAUTION));
   }, 30_000);
 });
 

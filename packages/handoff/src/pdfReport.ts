@@ -103,9 +103,9 @@ function drawDiagramPages(doc: Doc, input: CalculationReportInput, sampled: Solv
     heading(doc, `Diagrams: ${set.title}`);
     paragraph(doc, "Solid line: maximum; dashed: minimum. Shear and deflection positive upward, bending moment positive sagging, drawn upward.");
     drawBeam(doc, input.model, u);
-    drawDiagram(doc, { title: "Shear V", xs: set.xs, curves: set.V, label: (v) => formatShort(u, "force", v) });
-    drawDiagram(doc, { title: "Bending moment M", xs: set.xs, curves: set.M, label: (v) => formatShort(u, "moment", v) });
-    drawDiagram(doc, { title: "Deflection uy", xs: set.xs, curves: set.uy, label: (v) => formatShort(u, "deflection", v) });
+    drawDiagram(doc, { title: "Shear V", xs: set.xs, curves: set.V, label: (v) => formatShort(u, "force", v, 4) });
+    drawDiagram(doc, { title: "Bending moment M", xs: set.xs, curves: set.M, label: (v) => formatShort(u, "moment", v, 4) });
+    drawDiagram(doc, { title: "Deflection uy", xs: set.xs, curves: set.uy, label: (v) => formatShort(u, "deflection", v, 4) });
   }
 }
 

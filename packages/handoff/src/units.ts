@@ -82,9 +82,9 @@ export function formatQuantity(system: UnitSystem, quantity: Quantity, si: numbe
   return `${formatNumber(toDisplay(system, quantity, si), decimals)} ${UNITS[system][quantity].label}`;
 }
 
-/** Compact form for sentences: trailing zeros dropped, e.g. "6.5 m", "-2 kN/m". */
-export function formatShort(system: UnitSystem, quantity: Quantity, si: number): string {
-  const value = Number(toDisplay(system, quantity, si).toPrecision(6));
+/** Compact form for sentences and drawings: trailing zeros dropped, e.g. "6.5 m", "-2 kN/m". */
+export function formatShort(system: UnitSystem, quantity: Quantity, si: number, significant = 6): string {
+  const value = Number(toDisplay(system, quantity, si).toPrecision(significant));
   return `${Object.is(value, -0) ? 0 : value} ${UNITS[system][quantity].label}`;
 }
 
