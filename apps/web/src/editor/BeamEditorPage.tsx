@@ -1,25 +1,29 @@
 import { Link, useParams } from "react-router";
+import { can } from "@spanwright/contracts";
 import { useBeam } from "../api/beams";
-import { Caution } from "../components/Caution";
+import { useProject } from "../api/projects";
 import { Loading, QueryError } from "../components/QueryState";
+import { EditorSession } from "./session/EditorSession";
 
 /**
- * Placeholder created by the app shell so the route resolves; the beam editor replaces this file.
- * Contract with the router: a named export `BeamEditorPage`, reading :projectId and :beamId itself.
+ * Route /projects/:projectId/beams/:beamId: loads the beam's latest revision and opens it. The
+ * open document then lives in the editor store, not the query cache; saving creates a revision.
  */
 export function BeamEditorPage() {
   const { projectId = "", beamId = "" } = useParams();
   const beam = useBeam(projectId, beamId);
-  if (beam.isPending) return <Loading label="Loading beam…" />;
+  const project = useProject(projectId);
+  if (beam.isPending || project.isPending) return <Loading label="Opening beam…" />;
   if (beam.isError) return <QueryError error={beam.error} title="Could not load the beam" onRetry={() => void beam.refetch()} />;
+  const units = project.data?.unitSystem ?? "si";
+  const canEdit = project.data ? can(project.data.role, "edit") : false;
   return (
-    <div className="space-y-4">
+    <div className="space-y-2">
       <Link to={`/projects/${projectId}`} className="text-sm text-paper-600 hover:underline">
-        Back to project
+        ← {project.data?.name ?? "Back to project"}
       </Link>
-      <h1 className="text-2xl font-semibold text-ink-900">{beam.data.beam.name}</h1>
-      <p className="text-paper-700">Revision r{beam.data.revision.version}. The beam editor is not here yet.</p>
-      <Caution />
+      {/* A new key per beam gives each beam a fresh store, history and draft. */}
+      <EditorSession key={`${projectId}/${beamId}`} projectId={projectId} initial={beam.data} units={units} canEdit={canEdit} />
     </div>
   );
 }
