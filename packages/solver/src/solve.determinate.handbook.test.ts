@@ -125,6 +125,23 @@ describe("simply supported beam", () => {
   });
 });
 
+describe("beam overhanging one support", () => {
+  it("under a point load at the end of the overhang matches AWC (overhang, concentrated load at end; from memory)", () => {
+    const a = 2; // overhang
+    const r = run(beam([{ x: 0, support: pin }, { x: L, support: pin }, { x: L + a }], [{ type: "point", x: L + a, fy: -P }]));
+    expectClose(reactionAt(r, 0).fy, (-P * a) / L); // R1 = Pa/L, holding down
+    expectClose(reactionAt(r, 1).fy, (P * (L + a)) / L); // R2 = P(L + a)/L
+    expectClose(r.extremes.Mmin.value, -P * a); // at R2
+    expectClose(r.extremes.Mmin.x, L, L);
+    expectClose(nodeAt(r, 2).uy, (-P * a * a * (L + a)) / (3 * EI)); // Δ tip = Pa²(L + a)/3EI
+    expectClose(r.extremes.uyMin.value, (-P * a * a * (L + a)) / (3 * EI));
+    // Upward Δmax between supports = PaL²/(9√3·EI) = 0.06415·PaL²/EI at x = L/√3.
+    expectClose(r.extremes.uyMax.value, (P * a * L * L) / (9 * Math.sqrt(3) * EI));
+    expectClose(r.extremes.uyMax.x, L / Math.sqrt(3), L);
+    expectClose(nodeAt(r, 0).rz, (P * a * L) / (6 * EI)); // θ = −(1/EIL)∫M(L − x)dx with M = −Pax/L
+  });
+});
+
 describe("cantilever fixed at x = 0", () => {
   const nodes = [{ x: 0, support: fix }, { x: L }];
 

@@ -121,6 +121,28 @@ describe("superposition", () => {
 });
 
 describe("exact extremes", () => {
+  it("report where they occur: the deflection (continuous) and, away from moment jumps, the moment there equal the extreme", () => {
+    fc.assert(
+      fc.property(twoCaseModel, ({ shape, loadsA }) => {
+        const model = toModel(shape, [{ id: "A", category: "dead", loads: loadsA }]);
+        const r = caseResult(solve(model) as SolveOutput, "A");
+        const keys = ["uyMax", "uyMin", ...(loadsA.some((l) => l.type === "moment") ? [] : (["Mmax", "Mmin"] as const))] as const;
+        const at = keys.map((k) => r.extremes[k].x);
+        const again = caseResult(solve({ ...model, stations: at }) as SolveOutput, "A");
+        const ps = combinedScale(model, [[loadsA, 1]]);
+        // A support moment (fixed, guided, rotational spring) is a jump in M like an applied moment.
+        const jumpsInM = new Set(shape.nodes.filter((n) => n.support && n.support.type !== "pinned" && (n.support.type !== "spring" || n.support.kr)).map((n) => n.x));
+        keys.forEach((k, i) => {
+          const key = k.startsWith("uy") ? "uy" : "M";
+          if (key === "M" && jumpsInM.has(at[i]!)) return;
+          const scale = Math.max(quantityScale(key, again.stations, ps), Math.abs(r.extremes[k].value));
+          expectClose(again.stations.find((st) => st.x === at[i])![key], r.extremes[k].value, scale);
+        });
+      }),
+      { numRuns: 80 },
+    );
+  }, TIMEOUT);
+
   it("are at least as large as every sampled station value", () => {
     fc.assert(
       fc.property(twoCaseModel, ({ shape, loadsA, stations }) => {

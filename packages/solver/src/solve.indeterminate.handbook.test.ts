@@ -133,5 +133,24 @@ describe("beam fixed at both ends", () => {
     expectClose(reactionAt(r, 1).mz, (-w * L * L) / 20); // wL²/20 at the heavy end
     expectClose(r.extremes.Mmin.value, (-w * L * L) / 20);
     expectClose(r.extremes.Mmin.x, L, L);
+    // M(x) = −wL²/30 + 3wLx/20 − wx³/6L peaks where V = 3wL/20 − wx²/2L = 0, x = L√0.3 (derived).
+    const xm = L * Math.sqrt(0.3);
+    expectClose(r.extremes.Mmax.value, (-w * L * L) / 30 + (3 * w * L * xm) / 20 - (w * xm ** 3) / (6 * L));
+    expectClose(r.extremes.Mmax.x, xm, L);
+  });
+});
+
+describe("beam fixed at x = 0 and guided at x = L", () => {
+  it("under an end load deflects PL³/12EI with end moments PL/2 (Roark Table 8.1 case 1b, from memory)", () => {
+    const r = run(beam([{ x: 0, support: { type: "fixed" } }, { x: L, support: { type: "guided" } }], [{ type: "point", x: L, fy: -P }], { stations: [L / 2] }));
+    expectClose(reactionAt(r, 0).fy, P);
+    expectClose(reactionAt(r, 1).fy, 0, P);
+    expectClose(reactionAt(r, 0).mz, (P * L) / 2);
+    expectClose(reactionAt(r, 1).mz, (P * L) / 2);
+    expectClose(nodeAt(r, 1).uy, (-P * L ** 3) / (12 * EI));
+    expectClose(nodeAt(r, 1).rz, 0, (P * L * L) / EI);
+    expectClose(r.extremes.Mmin.value, (-P * L) / 2);
+    expectClose(r.extremes.Mmax.value, (P * L) / 2);
+    expectClose(stationAt(r, L / 2).M, 0, P * L); // antisymmetric moment, zero at mid-length
   });
 });
