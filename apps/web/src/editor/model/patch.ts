@@ -19,12 +19,14 @@ export function invertPatch(patch: DocPatch): DocPatch {
   return { before: patch.after, after: patch.before };
 }
 
-/** A patch taking `doc` to `doc` with `changes`; fields that stay the same object are left out. */
+/** A patch taking `doc` to `doc` with `changes`. Fields whose value is unchanged (the same object,
+ * or equal data, as when a cell commits the value it already had) are left out, so no-op edits
+ * add no undo entries. */
 export function patchFrom(doc: BeamDocument, changes: Partial<BeamDocument>): DocPatch {
   const before: Record<string, unknown> = {};
   const after: Record<string, unknown> = {};
   for (const key of Object.keys(changes) as (keyof BeamDocument)[]) {
-    if (changes[key] === doc[key]) continue;
+    if (changes[key] === doc[key] || deepEqual(changes[key], doc[key])) continue;
     before[key] = doc[key];
     after[key] = changes[key];
   }

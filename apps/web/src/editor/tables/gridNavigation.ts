@@ -2,9 +2,18 @@ import type { KeyboardEvent } from "react";
 
 const FOCUSABLE = "input, select, button";
 
+// Plain child lists rather than tBodies/rows/cellIndex, which some DOM implementations lack.
+function bodyRows(table: HTMLTableElement): HTMLElement[] {
+  return Array.from(table.querySelectorAll<HTMLElement>(":scope > tbody > tr"));
+}
+
+function cellsOf(tr: Element): Element[] {
+  return Array.from(tr.children).filter((c) => c.tagName === "TD" || c.tagName === "TH");
+}
+
 function cellControl(table: HTMLTableElement, row: number, col: number): HTMLElement | null {
-  const tr = table.tBodies[0]?.rows[row];
-  const td = tr?.cells[col];
+  const tr = bodyRows(table)[row];
+  const td = tr ? cellsOf(tr)[col] : undefined;
   return td?.querySelector<HTMLElement>(FOCUSABLE) ?? null;
 }
 
@@ -17,11 +26,12 @@ export function navigateGrid(e: KeyboardEvent<HTMLElement>): void {
   const target = e.target as HTMLElement;
   if (target.tagName === "SELECT" && !e.ctrlKey) return; // arrows choose options there
   const td = target.closest("td");
-  const tr = td?.parentElement as HTMLTableRowElement | null;
+  const tr = td?.parentElement;
   const table = target.closest("table");
   if (!td || !tr || !table) return;
-  const row = tr.sectionRowIndex;
-  const col = (td as HTMLTableCellElement).cellIndex;
+  const row = bodyRows(table).indexOf(tr);
+  const col = cellsOf(tr).indexOf(td);
+  if (row < 0 || col < 0) return;
   let next: HTMLElement | null = null;
   if (e.key === "ArrowDown" || (e.key === "Enter" && target.tagName === "INPUT" && !e.shiftKey)) next = cellControl(table, row + 1, col);
   else if (e.key === "ArrowUp" || (e.key === "Enter" && e.shiftKey)) next = cellControl(table, row - 1, col);
