@@ -21,11 +21,18 @@ interface Scenario {
   factors: { D: number; L: number };
 }
 
+function fullLengthLoad(shape: BeamShape): LoadSpec {
+  return { type: "distributed", x1: shape.nodes[0]!.x, x2: shape.nodes[shape.nodes.length - 1]!.x, qy1: -5000, qy2: -8000 };
+}
+
 const scenarioArb: fc.Arbitrary<Scenario> = beamShapeArb({ allowGuided: false }).chain((shape) =>
   fc.record({
     shape: fc.constant(shape),
     dead: loadsArb(shape.nodes, { allowSettlement: true }, 3),
-    live: loadsArb(shape.nodes, { momentsOffNodes: true }, 6),
+    // Half the time a full-length load as well, so most spans carry a piece and patterns matter.
+    live: fc
+      .tuple(loadsArb(shape.nodes, { momentsOffNodes: true }, 5), fc.boolean())
+      .map(([loads, full]) => (full ? [...loads, fullLengthLoad(shape)] : loads)),
     stations: stationsArb(shape.nodes, 12),
     factors: fc.constantFrom({ D: 1.2, L: 1.6 }, { D: 1.0, L: 1.0 }, { D: 0.9, L: 1.5 }, { D: 1.35, L: -0.5 }),
   }),

@@ -7,6 +7,8 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { SolverError, solve } from "./index";
 import { beamShapeArb, loadsArb, toModel } from "./testing/arbitraries";
+import type { NodeSpec } from "./testing/exchange";
+import { isStable } from "./testing/stability";
 import { beam } from "./testing/exchange";
 
 /** Library calls have no size limit, so only these two codes may appear (exchange format). */
@@ -84,6 +86,77 @@ function setAt(root: unknown, path: Key[], replacement: unknown): void {
   if (replacement === undefined && !Array.isArray(target)) delete target[last];
   else target[last] = replacement ?? null;
 }
+
+describe("mechanism detection", () => {
+  it("reports mechanism exactly when an independent rigid-body check finds the beam unstable", () => {
+    // Random hinges (where the contract allows them) and removed supports, with no stability filter.
+    const arb = fc.record({
+      shape: beamShapeArb(),
+      hinges: fc.array(fc.boolean(), { minLength: 20, maxLength: 20 }),
+      drops: fc.array(fc.integer({ min: 0, max: 5 }), { minLength: 20, maxLength: 20 }),
+    });
+    fc.assert(
+      fc.property(arb, ({ shape, hinges, drops }) => {
+        const nodes: NodeSpec[] = shape.nodes.map((n, i) => {
+          const support = drops[i] === 0 ? undefined : n.support;
+          const s = support;
+          const hingeAllowed = i > 0 && i < shape.nodes.length - 1 && (!s || s.type === "pinned" || (s.type === "spring" && !s.kr));
+          return { x: n.x, ...(support ? { support } : {}), ...(hingeAllowed && hinges[i] ? { hinge: true } : {}) };
+        });
+        const model = toModel({ ...shape, nodes }, [{ id: "A", category: "dead", loads: [{ type: "point", x: nodes[1]!.x, fy: -1000 }] }]);
+        const stable = isStable(nodes);
+        let code: string | null = null;
+        try {
+          solve(model);
+        } catch (e) {
+          if (!(e instanceof SolverError)) throw e;
+          code = e.code;
+        }
+        expect(code, JSON.stringify(nodes)).toBe(stable ? null : "mechanism");
+      }),
+      { numRuns: 400 },
+    );
+  }, TIMEOUT);
+});
+
+describe("mechanism fixtures found by the property above", () => {
+  // Both are mechanisms by inspection (counted in the comments); a solve that returns instead
+  // gives displacements of ~1e8 m and reactions that do not balance the load.
+  it("a Timoshenko beam pinned at 0 and 2.5 m with a hinge at 0.125 m (three collinear hinges: 0, 0.125, 2.5)", () => {
+    const seg = (I: number) => ({ E: 2.0e11, I, A: 0.0192, G: 7.7e10, shearFactor: 5 / 6 });
+    const model = {
+      format: "spanwright.beam/1",
+      theory: "timoshenko",
+      nodes: [{ x: 0, support: { type: "pinned" } }, { x: 0.125, hinge: true }, { x: 2.5, support: { type: "pinned" } }, { x: 8 }],
+      segments: [seg(0.00014199999999999998), seg(0.000042), seg(0.000009999999999999999)],
+      loadCases: [{ id: "A", category: "dead", loads: [{ type: "point", x: 1, fy: -1000 }] }],
+    };
+    expect(() => solve(model)).toThrow(expect.objectContaining({ code: "mechanism" }));
+  });
+
+  it("a vertical spring, hinge, guided support, hinge, pin: the first two parts swing together", () => {
+    // Parts [0, 0.3375] on the spring (uy only), [0.3375, 3.075] on the guide (rz only),
+    // [3.075, 14.5] on the pin: 5 restraints for 6 rigid-body freedoms.
+    const EI = [[2e11, 0.000011], [1.2e10, 0.001722], [1.2e10, 0.000397], [1.2e10, 0.000936], [2e11, 0.000025], [1.2e10, 0.001725], [2e11, 0.00014], [2e11, 0.000095]];
+    const model = {
+      format: "spanwright.beam/1",
+      nodes: [
+        { x: 0, support: { type: "spring", ky: 1.0e7 } },
+        { x: 0.3375, hinge: true },
+        { x: 0.5625 },
+        { x: 2.25, support: { type: "guided" } },
+        { x: 3.075, hinge: true },
+        { x: 7.75, support: { type: "pinned" } },
+        { x: 8.0875 },
+        { x: 9.4375 },
+        { x: 14.5 },
+      ],
+      segments: EI.map(([E, I]) => ({ E, I })),
+      loadCases: [{ id: "A", category: "dead", loads: [{ type: "point", x: 0.3375, fy: -1000 }] }],
+    };
+    expect(() => solve(model)).toThrow(expect.objectContaining({ code: "mechanism" }));
+  });
+});
 
 describe("error codes of the exchange format", () => {
   it("invalid-model names the offending path", () => {
