@@ -13,6 +13,11 @@ export const errorCodes = [
   "last-owner", // 409: the last owner cannot be removed or demoted
   "version-conflict", // 409: baseVersion is not the latest; details.current is the latest revision
   "already-checked", // 409: a checked revision is immutable
+  "file-too-large", // 413: an upload over uploadLimits.fileBytes (nothing is written)
+  "invalid-file", // 422: an upload that is not what the route takes (not JSON, not CSV, no file)
+  "invalid-schedule", // 422: a load schedule with row errors; details.errors lists them
+  "invalid-recipient", // 422: a hand-off recipient who is not a viewer member; details.recipient
+  "mail-failed", // 502: the SMTP server did not accept the hand-off; nothing was recorded
   "too-large", // 413 for bodies over the byte limit, 422 for models over the size limits
   "invalid-model", // 422: the solver rejected the model; details.where names the path
   "mechanism", // 422: the beam cannot carry load
@@ -35,6 +40,11 @@ export const errorStatus: Record<ErrorCode, number> = {
   "last-owner": 409,
   "version-conflict": 409,
   "already-checked": 409,
+  "file-too-large": 413,
+  "invalid-file": 422,
+  "invalid-schedule": 422,
+  "invalid-recipient": 422,
+  "mail-failed": 502,
   "too-large": 422,
   "invalid-model": 422,
   mechanism: 422,

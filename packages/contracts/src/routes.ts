@@ -5,9 +5,10 @@ export type HttpMethod = "GET" | "POST" | "PATCH" | "DELETE";
 /**
  * Who may call a route: `public` (anyone), `signed-in` (any session), or a project permission
  * (the caller must be a member of the project in the path with a role that has it; non-members get
- * 404, anonymous callers 401).
+ * 404, anonymous callers 401), or `owner-of-any-project` (signed in and owner of at least one
+ * project, else 403).
  */
-export type RouteAccess = "public" | "signed-in" | Permission;
+export type RouteAccess = "public" | "signed-in" | "owner-of-any-project" | Permission;
 
 export interface RouteSpec {
   readonly method: HttpMethod;
@@ -16,6 +17,8 @@ export interface RouteSpec {
   readonly access: RouteAccess;
   /** Success status. */
   readonly status: 200 | 201 | 204;
+  /** Request body format when not JSON. */
+  readonly body?: "multipart";
 }
 
 /** Every API route. The API test suite checks this table against the Express router. */
@@ -49,6 +52,22 @@ export const apiRoutes = {
   saveRevision: { method: "POST", path: "/api/projects/:projectId/beams/:beamId/revisions", access: "edit", status: 201 },
   getRevision: { method: "GET", path: "/api/projects/:projectId/beams/:beamId/revisions/:version", access: "read", status: 200 },
   checkRevision: { method: "POST", path: "/api/projects/:projectId/beams/:beamId/revisions/:version/check", access: "check", status: 200 },
+  // declared before the `:version` routes are matched: "compare" is not a version
+  compareRevisions: { method: "GET", path: "/api/projects/:projectId/beams/:beamId/revisions/compare", access: "read", status: 200 },
+  getReactions: { method: "GET", path: "/api/projects/:projectId/beams/:beamId/revisions/:version/reactions", access: "read", status: 200 },
+  getReactionsCsv: { method: "GET", path: "/api/projects/:projectId/beams/:beamId/revisions/:version/reactions.csv", access: "read", status: 200 },
+  getReportPdf: { method: "GET", path: "/api/projects/:projectId/beams/:beamId/revisions/:version/report.pdf", access: "read", status: 200 },
+
+  importBeam: { method: "POST", path: "/api/projects/:projectId/beams/import", access: "edit", status: 201, body: "multipart" },
+  previewLoadSchedule: { method: "POST", path: "/api/projects/:projectId/beams/:beamId/load-schedule/preview", access: "edit", status: 200, body: "multipart" },
+  applyLoadSchedule: { method: "POST", path: "/api/projects/:projectId/beams/:beamId/load-schedule/apply", access: "edit", status: 201, body: "multipart" },
+
+  createHandoff: { method: "POST", path: "/api/projects/:projectId/beams/:beamId/revisions/:version/handoffs", access: "edit", status: 201 },
+  listProjectHandoffs: { method: "GET", path: "/api/projects/:projectId/handoffs", access: "read", status: 200 },
+  listBeamHandoffs: { method: "GET", path: "/api/projects/:projectId/beams/:beamId/handoffs", access: "read", status: 200 },
+
+  /** Development and tests only (404 in production unless OUTBOX_ENABLED). */
+  outbox: { method: "GET", path: "/api/outbox", access: "owner-of-any-project", status: 200 },
 } as const satisfies Record<string, RouteSpec>;
 
 export type RouteName = keyof typeof apiRoutes;
