@@ -26,7 +26,11 @@ const fix = { type: "fixed" } as const;
 
 describe("simply supported beam", () => {
   it("under uniform load matches AWC Fig. 1 / AISC Table 3-23 case 1", () => {
-    const r = run(beam([{ x: 0, support: pin }, { x: L, support: pin }], [{ type: "distributed", x1: 0, x2: L, qy1: -w, qy2: -w }], { stations: [L / 4] }));
+    const r = run(beam([{ x: 0, support: pin }, { x: L, support: pin }], [{ type: "distributed", x1: 0, x2: L, qy1: -w, qy2: -w }], { stations: [0, L / 4, L] }));
+    // Contract: at a support the station reports the value just right, at the right end just left.
+    expectClose(stationAt(r, 0).V, (w * L) / 2);
+    expectClose(stationAt(r, L).V, (-w * L) / 2);
+    expectClose(stationAt(r, L).M, 0, w * L * L);
     expectClose(reactionAt(r, 0).fy, (w * L) / 2); // R = wL/2
     expectClose(reactionAt(r, 1).fy, (w * L) / 2);
     expectClose(r.extremes.Mmax.value, (w * L * L) / 8); // Mmax = wL²/8 at centre

@@ -132,6 +132,12 @@ describe("pattern envelope", () => {
           expectClose(e.Mmax, Math.max(env.stations[i]!.Mmax, c2.stations[i]!.M), sScale);
           expectClose(e.Mmin, Math.min(env.stations[i]!.Mmin, c2.stations[i]!.M), sScale);
         });
+        for (const row of star.reactions) {
+          const c1Row = env.reactions.find((q) => q.node === row.node)!;
+          const c2Row = c2.reactions.find((q) => q.node === row.node)!;
+          expectClose(row.fyMax, Math.max(c1Row.fyMax, c2Row.fy), fScale);
+          expectClose(row.fyMin, Math.min(c1Row.fyMin, c2Row.fy), fScale);
+        }
       }),
       { numRuns: RUNS },
     );
