@@ -1,5 +1,4 @@
 import { useMemo, useState } from "react";
-import { Caution } from "../components/Caution";
 import { useEditor, useEditorStore } from "./store/useEditor";
 import { useAnalysis } from "./results/useAnalysis";
 import { locateError } from "./results/errorLocation";
@@ -76,7 +75,6 @@ export function EditorWorkspace() {
           <Active />
         </div>
       </section>
-      <Caution />
     </div>
   );
 }

@@ -9,7 +9,7 @@ export const BEAM_Y = 170; // px from the top of the model canvas
 export const BEAM_THICKNESS = 6;
 export const MODEL_HEIGHT = 260;
 const LANE_HEIGHT = 34; // px per stacked distributed-load lane
-const LANE_GAP = 6;
+const LANE_GAP = 16; // room for the label of the block below
 const MAX_ARROW = 70;
 const MIN_ARROW = 24;
 
