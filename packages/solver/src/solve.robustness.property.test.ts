@@ -7,9 +7,8 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { SolverError, solve } from "./index";
 import { beamShapeArb, loadsArb, toModel } from "./testing/arbitraries";
-import type { NodeSpec } from "./testing/exchange";
+import { beam, type BeamModel, type LoadSpec, type NodeSpec } from "./testing/exchange";
 import { isStable } from "./testing/stability";
-import { beam } from "./testing/exchange";
 
 /** Library calls have no size limit, so only these two codes may appear (exchange format). */
 const LIBRARY_CODES = ["invalid-model", "mechanism"];
@@ -168,6 +167,41 @@ describe("error codes of the exchange format", () => {
     } catch (e) {
       expect((e as SolverError).code).toBe("invalid-model");
       expect((e as SolverError).where).toBe("segments[2].I");
+    }
+  });
+
+  type Edit = (m: BeamModel) => void;
+  const point = (x: number): LoadSpec => ({ type: "point", x, fy: -1000 });
+  // Each row breaks one rule of the exchange format; `where` must lead to the offending path.
+  it.each<[string, Edit, string]>([
+    ["a load outside the beam", (m) => void (m.loadCases[0]!.loads[0] = point(100)), "loadCases[0].loads[0]"],
+    ["a distributed load starting before the beam", (m) => void m.loadCases[0]!.loads.push({ type: "distributed", x1: -1, x2: 2, qy1: -1, qy2: -1 }), "loadCases[0].loads[1]"],
+    ["a distributed load with x1 = x2", (m) => void m.loadCases[0]!.loads.push({ type: "distributed", x1: 2, x2: 2, qy1: -1, qy2: -1 }), "loadCases[0].loads[1]"],
+    ["a settlement of an unsupported node", (m) => void m.loadCases[0]!.loads.push({ type: "settlement", node: 1, uy: -0.01 }), "loadCases[0].loads[1]"],
+    ["a settlement of a node that does not exist", (m) => void m.loadCases[0]!.loads.push({ type: "settlement", node: 9, uy: -0.01 }), "loadCases[0].loads[1]"],
+    ["a hinge on a fixed support", (m) => void (m.nodes[1] = { x: 3, support: { type: "fixed" }, hinge: true }), "nodes[1]"],
+    ["a hinge at an end node", (m) => void (m.nodes[2]!.hinge = true), "nodes[2]"],
+    ["a combination id already used by a case", (m) => void (m.combinations = [{ id: "D", factors: { D: 1 } }]), "combinations[0]"],
+    ["a combination of an unknown case", (m) => void (m.combinations = [{ id: "C", factors: { X: 1 } }]), "combinations[0]"],
+    ["one segment too few", (m) => void m.segments.pop(), "segments"],
+    ["node x not increasing", (m) => void (m.nodes[1]!.x = 7), "nodes["],
+    ["Timoshenko theory without A, G, shearFactor", (m) => void (m.theory = "timoshenko"), "segments[0]"],
+    ["a spring with no stiffness", (m) => void (m.nodes[1]!.support = { type: "spring", ky: 0, kr: 0 }), "nodes[1]"],
+    ["a zero modulus", (m) => void (m.segments[0]!.E = 0), "segments[0].E"],
+    ["another format version", (m) => void ((m as { format: string }).format = "spanwright.beam/2"), "format"],
+    ["an unknown load category", (m) => void (m.loadCases[0]!.category = "snowish"), "loadCases[0].category"],
+    ["a station outside the beam", (m) => void (m.stations = [7]), "stations[0]"],
+  ])("invalid-model for %s", (_name, edit, wherePrefix) => {
+    const model = beam([{ x: 0, support: { type: "pinned" } }, { x: 3 }, { x: 6, support: { type: "pinned" } }], [point(2)]);
+    model.loadCases[0]!.id = "D";
+    edit(model);
+    expect(() => solve(model)).toThrow(SolverError);
+    try {
+      solve(model);
+    } catch (e) {
+      expect((e as SolverError).code).toBe("invalid-model");
+      expect((e as SolverError).where.startsWith(wherePrefix), `where = ${(e as SolverError).where}`).toBe(true);
+      expect((e as SolverError).message.length).toBeGreaterThan(0);
     }
   });
 
