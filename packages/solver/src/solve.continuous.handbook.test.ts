@@ -193,4 +193,19 @@ describe("Timoshenko beams (shear deflection, common practice)", () => {
     expectClose(nodeAt(r, 0).rz, (-w * L ** 3) / (24 * EI));
     expectClose(r.extremes.Mmax.value, (w * L * L) / 8);
   });
+
+  it("cantilever under uniform load deflects wL⁴/8EI + wL²/2κGA at the tip (shear part = ∫V/κGA dx)", () => {
+    const r = run(beam([{ x: 0, support: fix }, { x: L }], [udl(0, L)], { theory: "timoshenko", segment: section }));
+    expectClose(nodeAt(r, 1).uy, -((w * L ** 4) / (8 * EI) + (w * L * L) / (2 * kGA)));
+    expectClose(nodeAt(r, 1).rz, (-w * L ** 3) / (6 * EI));
+  });
+
+  it("fixed-fixed beam under uniform load keeps end moments wL²/12 and deflects wL⁴/384EI + wL²/8κGA", () => {
+    // By symmetry the section rotation is zero at mid-span as well as at the ends, so the moment
+    // distribution is the Euler-Bernoulli one; shear adds ∫V/κGA from an end to mid-span.
+    const r = run(beam([{ x: 0, support: fix }, { x: L, support: fix }], [udl(0, L)], { theory: "timoshenko", segment: section, stations: [L / 2] }));
+    expectClose(reactionAt(r, 0).mz, (w * L * L) / 12);
+    expectClose(stationAt(r, L / 2).M, (w * L * L) / 24);
+    expectClose(stationAt(r, L / 2).uy, -((w * L ** 4) / (384 * EI) + (w * L * L) / (8 * kGA)));
+  });
 });

@@ -15,7 +15,7 @@ export interface BeamShape {
 }
 
 export interface ShapeOptions {
-  /** Guided supports make the contract's "span" ambiguous for pattern loading; off there. */
+  /** Guided supports (a guided node is a "supported node", so it bounds a pattern span). */
   allowGuided?: boolean;
   /** Timoshenko segments (A, G, shearFactor) on some beams. */
   allowTimoshenko?: boolean;
