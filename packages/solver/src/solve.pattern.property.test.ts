@@ -143,3 +143,60 @@ describe("pattern envelope", () => {
     );
   }, TIMEOUT);
 });
+
+describe("pattern envelope with two patterned cases", () => {
+  it("takes each case's span pieces independently: equals brute force over all 2²ⁿ arrangements (n ≤ 3)", () => {
+    const arb = beamShapeArb()
+      .filter((shape) => spansOf(shape.nodes).length <= 3)
+      .chain((shape) =>
+        fc.record({
+          shape: fc.constant(shape),
+          dead: loadsArb(shape.nodes, {}, 2),
+          live: loadsArb(shape.nodes, { momentsOffNodes: true }, 4).map((l) => [...l, fullLengthLoad(shape)]),
+          snow: loadsArb(shape.nodes, { momentsOffNodes: true }, 3),
+          stations: stationsArb(shape.nodes, 10),
+        }),
+      );
+    const factors = { D: 1.2, L: 1.6, S: 0.5 };
+    const build = (s: { shape: BeamShape; dead: LoadSpec[]; stations: number[] }, parts: [string, LoadSpec[], boolean][]): BeamModel => {
+      const used = parts.filter(([, loads]) => loads.length > 0);
+      const cases: BeamModel["loadCases"] = [{ id: "D", category: "dead", loads: s.dead }, ...used.map(([id, loads, pattern]) => ({ id, category: id === "L" ? "live" : "snow", pattern, loads }))];
+      const f: Record<string, number> = { D: factors.D };
+      for (const [id] of used) f[id] = factors[id as "L" | "S"];
+      return toModel(s.shape, cases, { combinations: [{ id: "C", factors: f }], stations: s.stations });
+    };
+    fc.assert(
+      fc.property(arb, (s) => {
+        const model = build(s, [["L", s.live, true], ["S", s.snow, true]]);
+        const env = envelope(solve(model) as SolveOutput, "C");
+        const spans = spansOf(s.shape.nodes);
+        const pl = splitIntoSpans(spans, s.live);
+        const ps = splitIntoSpans(spans, s.snow);
+        const all: CaseResult[] = [];
+        for (let a = 0; a < 1 << pl.length; a++) {
+          for (let b = 0; b < 1 << ps.length; b++) {
+            const m = build(s, [["L", loadsOfArrangement(pl, a), false], ["S", loadsOfArrangement(ps, b), false]]);
+            all.push(caseResult(solve(m) as SolveOutput, "C"));
+          }
+        }
+        const scale = combinedScale(model, [[s.dead, factors.D], [s.live, factors.L], [s.snow, factors.S]]);
+        const allStations = all.flatMap((r) => r.stations);
+        for (const [hi, lo, key] of stationQuantities) {
+          const q = quantityScale(key, allStations, scale);
+          env.stations.forEach((e, i) => {
+            const values = all.map((r) => r.stations[i]![key]);
+            expectClose(e[hi], Math.max(...values), q);
+            expectClose(e[lo], Math.min(...values), q);
+          });
+        }
+        const fScale = Math.max(scale.force, ...all.flatMap((r) => r.reactions.map((q) => Math.abs(q.fy))));
+        for (const row of env.reactions) {
+          const fy = all.map((r) => r.reactions.find((q) => q.node === row.node)!.fy);
+          expectClose(row.fyMax, Math.max(...fy), fScale);
+          expectClose(row.fyMin, Math.min(...fy), fScale);
+        }
+      }),
+      { numRuns: 25 },
+    );
+  }, TIMEOUT);
+});
