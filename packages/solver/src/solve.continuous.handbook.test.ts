@@ -170,6 +170,23 @@ it("a Gerber beam (fixed end, internal hinge, far pin) gives reactions by static
   expectClose(hinge.uy, -dh);
   expectClose(hinge.rzLeft, -((w * a ** 3) / (6 * EI) + (Vh * a * a) / (2 * EI)));
   expectClose(hinge.rzRight, dh / b - (w * b ** 3) / (24 * EI));
+  // A station at the hinge reports the value just right of it (exchange format).
+  expectClose(stationAt(r, a).rz, dh / b - (w * b ** 3) / (24 * EI));
+  expectClose(stationAt(r, a).uy, -dh);
+});
+
+it("a hinge over the middle support turns two spans into two simple beams (AWC Fig. 1 twice)", () => {
+  const r = run(beam([{ x: 0, support: pin }, { x: L, support: pin, hinge: true }, { x: 2 * L, support: pin }], [udl(0, 2 * L)]));
+  expectClose(reactionAt(r, 0).fy, (w * L) / 2);
+  expectClose(reactionAt(r, 1).fy, w * L);
+  expectClose(reactionAt(r, 2).fy, (w * L) / 2);
+  const mid = nodeAt(r, 1);
+  expectClose(mid.uy, 0, (w * L ** 4) / EI);
+  expectClose(mid.rzLeft, (w * L ** 3) / (24 * EI)); // right end of the left simple span
+  expectClose(mid.rzRight, (-w * L ** 3) / (24 * EI));
+  expectClose(r.extremes.Mmax.value, (w * L * L) / 8);
+  expectClose(r.extremes.Mmin.value, 0, w * L * L);
+  expectClose(r.extremes.uyMin.value, (-5 * w * L ** 4) / (384 * EI));
 });
 
 describe("Timoshenko beams (shear deflection, common practice)", () => {
