@@ -60,3 +60,13 @@ describe("actions run commands", () => {
     expect(findAction("delete").isEnabled(new EditorStore(twoSpanDocument()).getState())).toBe(false);
   });
 });
+
+describe("escape", () => {
+  it("returns to the select tool and clears the selection", () => {
+    const store = new EditorStore(twoSpanDocument());
+    store.setUi({ tool: "place-load", selection: { kind: "node", id: ids.n0 } });
+    findActionForKey(editorActions, key("Escape"))!.run(store);
+    expect(store.getState().ui.tool).toBe("select");
+    expect(store.getState().ui.selection).toBeNull();
+  });
+});

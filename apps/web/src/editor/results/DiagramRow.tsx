@@ -62,10 +62,14 @@ export function DiagramRow({ series, quantity, top, width, camera, units }: Diag
         const px = worldToScreenX(camera, e.x);
         const py = toPx(e.value);
         const above = e.value >= 0;
+        const text = formatQuantity(e.value, units, info.kind);
+        // Keep labels inside the row: near the right edge they sit left of their point.
+        const labelWidth = text.length * 6.5;
+        const lx = px + 4 + labelWidth > width ? px - 4 - labelWidth : px + 4;
         return (
           <Group key={i}>
             <Circle x={px} y={py} radius={3} fill={info.color} />
-            <Text x={px + 4} y={above ? py - 14 : py + 3} text={formatQuantity(e.value, units, info.kind)} fontSize={11} fill={info.color} fontStyle="bold" />
+            <Text x={lx} y={above ? py - 14 : py + 3} text={text} fontSize={11} fill={info.color} fontStyle="bold" />
           </Group>
         );
       })}

@@ -18,7 +18,7 @@ export function ResultsReadout({ analysis, name, isEnvelope, hoverX, units }: { 
   return (
     <div className="space-y-3 text-sm">
       <section aria-live="polite">
-        <h3 className="text-xs font-semibold uppercase tracking-wide text-paper-600">
+        <h3 className="text-xs font-semibold text-paper-600">
           {hoverX === null ? "Point at a diagram to read values" : `At x = ${formatQuantity(hoverX, units, "position", 6)}`}
           {isEnvelope && hoverX !== null ? " (max / min)" : ""}
         </h3>
@@ -50,8 +50,22 @@ export function ResultsReadout({ analysis, name, isEnvelope, hoverX, units }: { 
         </dl>
       </section>
       <section>
+        <h3 className="text-xs font-semibold uppercase tracking-wide text-paper-600">Moment at supports{isEnvelope ? " (max / min)" : ""}</h3>
+        <dl className="mt-1 grid grid-cols-[auto_1fr] gap-x-3 font-mono text-xs tabular-nums">
+          {reactions.map((r) => {
+            const m = readAt(analysis, name, isEnvelope, r.x)?.M;
+            return m ? (
+              <div key={r.node} className="contents">
+                <dt className="text-paper-600">x = {formatQuantity(r.x, units, "position", 5)}</dt>
+                <dd>{pair(m, units, "M", isEnvelope)}</dd>
+              </div>
+            ) : null;
+          })}
+        </dl>
+      </section>
+      <section>
         <h3 className="text-xs font-semibold uppercase tracking-wide text-paper-600">Reactions{isEnvelope ? " (max / min)" : ""}</h3>
-        <table className="mt-1 w-full font-mono text-xs tabular-nums">
+        <table className="mt-1 w-full font-mono text-xs tabular-nums [&_td]:pr-2 [&_th]:pr-2">
           <thead className="text-left text-paper-600">
             <tr>
               <th className="font-normal">x</th>

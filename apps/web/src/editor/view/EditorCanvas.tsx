@@ -1,4 +1,4 @@
-import { useEffect, useMemo, useRef } from "react";
+import { useEffect, useMemo, useRef, type PointerEvent as ReactPointerEvent } from "react";
 import { Stage } from "react-konva";
 import type Konva from "konva";
 import { fitCamera, screenToWorldX, zoomAt, panBy } from "../geometry/camera";
@@ -55,13 +55,16 @@ export function EditorCanvas({ errorRange }: { errorRange: ErrorRange | null }) 
     }
   }, [width, store]);
 
-  const send = (type: PointerInput["type"], stage: Konva.Stage | null) => {
-    const pos = stage?.getPointerPosition();
-    if (!pos) return;
+  // Pointer input is read from the container element with pointer capture, so a drag that leaves
+  // the canvas keeps moving and still ends (one undo entry) when the button is released outside.
+  const send = (type: PointerInput["type"], e: ReactPointerEvent<HTMLDivElement>) => {
+    const rect = e.currentTarget.getBoundingClientRect();
+    const px = e.clientX - rect.left;
+    const py = e.clientY - rect.top;
     const ui = store.getState().ui;
-    const x = screenToWorldX(ui.camera, pos.x);
-    const target = hitTest(layoutScene(store.doc, ui.camera, ui.visibleCases), pos.x, pos.y);
-    runner.current.handle({ type, px: pos.x, py: pos.y, x, target }, ctx);
+    const x = screenToWorldX(ui.camera, px);
+    const target = hitTest(layoutScene(store.doc, ui.camera, ui.visibleCases), px, py);
+    runner.current.handle({ type, px, py, x, target }, ctx);
     if (type === "move") store.setUi({ hoverX: x });
   };
 
@@ -77,23 +80,27 @@ export function EditorCanvas({ errorRange }: { errorRange: ErrorRange | null }) 
     <div
       ref={container}
       className="relative w-full overflow-hidden rounded-md border border-paper-300 bg-paper-50"
-      style={{ height: MODEL_HEIGHT, cursor: toolCursor[tool] }}
+      style={{ height: MODEL_HEIGHT, cursor: toolCursor[tool], touchAction: "none" }}
       onKeyDown={(e) => {
         if (e.key === "Escape") runner.current.handle({ type: "cancel", px: 0, py: 0, x: 0, target: null }, ctx);
       }}
+      onPointerDown={(e) => {
+        if (e.button !== 0) return;
+        e.currentTarget.setPointerCapture(e.pointerId);
+        send("down", e);
+      }}
+      onPointerMove={(e) => send("move", e)}
+      onPointerUp={(e) => {
+        send("up", e);
+        if (e.currentTarget.hasPointerCapture(e.pointerId)) e.currentTarget.releasePointerCapture(e.pointerId);
+      }}
+      onPointerCancel={(e) => send("cancel", e)}
+      onPointerLeave={() => store.setUi({ hoverX: null })}
       tabIndex={0}
       role="application"
       aria-label="Beam canvas. Use the tables or the inspector for exact keyboard entry."
     >
-      <Stage
-        width={width}
-        height={MODEL_HEIGHT}
-        onPointerDown={(e) => send("down", e.target.getStage())}
-        onPointerMove={(e) => send("move", e.target.getStage())}
-        onPointerUp={(e) => send("up", e.target.getStage())}
-        onPointerLeave={() => store.setUi({ hoverX: null })}
-        onWheel={onWheel}
-      >
+      <Stage width={width} height={MODEL_HEIGHT} onWheel={onWheel}>
         <StaticLayer doc={doc} layout={layout} camera={camera} width={width} gridStep={gridStep} />
         <InteractiveLayer layout={layout} camera={camera} selection={selection} preview={preview} hoverX={hoverX} errorRange={errorRange} />
       </Stage>
