@@ -2,6 +2,7 @@ import type { BeamModel } from "./beamModelSchema.js";
 import type { Analysis, AnalysisCase, AnalysisCombination, Curve } from "./analysisTypes.js";
 import { assembleStiffness, segmentSections, type AssembledSystem } from "./assembleStiffness.js";
 import { factorBanded, solveFactored, type BandedSymmetricMatrix } from "./bandedMatrix.js";
+import { findRigidMotion } from "./checkStability.js";
 import { describeMechanism } from "./describeMechanism.js";
 import { fail, ok, unwrap, type Result } from "./errors.js";
 import { buildBases, buildLoadGrid, type BasisLoads, type LoadGrid } from "./loadGrid.js";
@@ -27,6 +28,8 @@ interface Context {
  */
 export function analyzeModel(model: BeamModel): Result<Analysis> {
   const dofs = numberDofs(model);
+  const rigidMotion = findRigidMotion(model, dofs);
+  if (rigidMotion) return { ok: false, error: describeMechanism(model, dofs, rigidMotion) };
   const sections = segmentSections(model);
   const system = assembleStiffness(model, dofs, sections);
   const factored = factorBanded(system.stiffness);
@@ -37,7 +40,10 @@ export function analyzeModel(model: BeamModel): Result<Analysis> {
   const lengths = Float64Array.from(sections, (_, e) => model.nodes[e + 1]!.x - model.nodes[e]!.x);
   const context: Context = { model, grid, dofs, sections, lengths, system, factors: factored.factors, supportedNodes };
   const bases = buildBases(model, grid);
-  const curves = bases.map((basis) => solveBasis(context, basis));
+  const size = curveSize(context);
+  const buffer = new Float64Array(size * bases.length);
+  const scratch = createScratch(context);
+  const curves = bases.map((basis, b) => solveBasis(context, basis, curveAt(context, buffer, b * size), scratch));
   const cases: AnalysisCase[] = model.loadCases.map((loadCase, caseIndex) => {
     const pieces = bases.flatMap((basis, b) => (basis.caseIndex === caseIndex ? [{ span: basis.span, curve: curves[b]! }] : []));
     const curve = combineCurves(context, pieces.map((p) => ({ curve: p.curve, factor: 1 })));
@@ -75,17 +81,28 @@ export function analyze(model: BeamModel): Analysis {
   return unwrap(analyzeModel(model));
 }
 
-function emptyCurve(context: Context): Curve {
+/** Doubles per curve: coefficients, three nodal arrays and two reaction arrays. */
+function curveSize(context: Context): number {
+  const n = context.model.nodes.length;
+  return (context.grid.x.length - 1) * COEFFICIENTS_PER_INTERVAL + 3 * n + 2 * context.supportedNodes.length;
+}
+
+/**
+ * A zeroed curve as views into `buffer` at `start`: one allocation serves many curves (small
+ * typed arrays each cost an allocation and GC work), and structured clone copies a shared
+ * buffer once.
+ */
+function curveAt(context: Context, buffer: Float64Array, start: number): Curve {
   const n = context.model.nodes.length;
   const m = context.supportedNodes.length;
-  return {
-    coef: new Float64Array((context.grid.x.length - 1) * COEFFICIENTS_PER_INTERVAL),
-    uy: new Float64Array(n),
-    rzLeft: new Float64Array(n),
-    rzRight: new Float64Array(n),
-    fy: new Float64Array(m),
-    mz: new Float64Array(m),
-  };
+  let at = start;
+  const take = (length: number) => buffer.subarray(at, (at += length));
+  const coef = take((context.grid.x.length - 1) * COEFFICIENTS_PER_INTERVAL);
+  return { coef, uy: take(n), rzLeft: take(n), rzRight: take(n), fy: take(m), mz: take(m) };
+}
+
+function emptyCurve(context: Context): Curve {
+  return curveAt(context, new Float64Array(curveSize(context)), 0);
 }
 
 function combineCurves(context: Context, terms: { curve: Curve; factor: number }[]): Curve {
@@ -101,33 +118,89 @@ function combineCurves(context: Context, terms: { curve: Curve; factor: number }
   return out;
 }
 
-function solveBasis(context: Context, basis: BasisLoads): Curve {
-  const { model, grid, dofs, sections, lengths, system } = context;
-  const nSeg = sections.length;
-  const particular = new Float64Array(4 * nSeg);
-  const state = new Float64Array(4);
-  const equivalent = new Float64Array(4);
-  const rhs = new Float64Array(dofs.count);
-  const add = (dof: number, v: number) => {
-    if (dof >= 0) rhs[dof]! += v;
+/** Work arrays reused by every right-hand side of one analysis. */
+interface Scratch {
+  particular: Float64Array;
+  state: Float64Array;
+  equivalent: Float64Array;
+  rhs: Float64Array;
+  loads: Float64Array;
+  correction: Float64Array;
+  settled: Float64Array;
+  startV: Float64Array;
+  startM: Float64Array;
+  endV: Float64Array;
+  endM: Float64Array;
+}
+
+function createScratch(context: Context): Scratch {
+  const nSeg = context.sections.length;
+  const nDof = context.dofs.count;
+  return {
+    particular: new Float64Array(4 * nSeg),
+    state: new Float64Array(4),
+    equivalent: new Float64Array(4),
+    rhs: new Float64Array(nDof),
+    loads: new Float64Array(nDof),
+    correction: new Float64Array(nDof),
+    settled: new Float64Array(nSeg + 1),
+    startV: new Float64Array(nSeg + 1),
+    startM: new Float64Array(nSeg + 1),
+    endV: new Float64Array(nSeg + 1),
+    endM: new Float64Array(nSeg + 1),
   };
-  for (let e = 0; e < nSeg; e++) {
+}
+
+function addToFree(rhs: Float64Array, dof: number, v: number): void {
+  if (dof >= 0) rhs[dof]! += v;
+}
+
+/** Right-hand side of one basis: equivalent nodal loads of span loads plus loads at nodes. */
+function assembleLoads(context: Context, basis: BasisLoads, scratch: Scratch): void {
+  const { grid, dofs, sections, lengths } = context;
+  const { particular, state, equivalent, rhs } = scratch;
+  rhs.fill(0);
+  for (let e = 0; e < sections.length; e++) {
     state.fill(0);
     marchSegment(grid, basis, e, sections[e]!, state);
     particular.set(state, 4 * e);
     if (state[0] === 0 && state[1] === 0 && state[2] === 0 && state[3] === 0) continue;
     equivalentNodalLoads(lengths[e]!, sections[e]!, state, equivalent);
-    elementDofs(dofs, e).forEach((dof, a) => add(dof, equivalent[a]!));
+    addToFree(rhs, dofs.uy[e]!, equivalent[0]!);
+    addToFree(rhs, dofs.rzRight[e]!, equivalent[1]!);
+    addToFree(rhs, dofs.uy[e + 1]!, equivalent[2]!);
+    addToFree(rhs, dofs.rzLeft[e + 1]!, equivalent[3]!);
   }
-  grid.pointNode.forEach((node, j) => {
-    if (node < 0) return;
-    add(dofs.uy[node]!, basis.fy[j]!);
-    add(dofs.rzRight[node]!, basis.mz[j]!);
-  });
+  for (let j = 0; j < grid.pointNode.length; j++) {
+    const node = grid.pointNode[j]!;
+    if (node < 0) continue;
+    addToFree(rhs, dofs.uy[node]!, basis.fy[j]!);
+    addToFree(rhs, dofs.rzRight[node]!, basis.mz[j]!);
+  }
+}
+
+function readNodalValues(context: Context, scratch: Scratch, curve: Curve): void {
+  const { dofs } = context;
+  const { rhs, settled } = scratch;
+  for (let i = 0; i < curve.uy.length; i++) {
+    const uy = dofs.uy[i]!;
+    const left = dofs.rzLeft[i]!;
+    const right = dofs.rzRight[i]!;
+    curve.uy[i] = uy >= 0 ? rhs[uy]! : settled[i]!;
+    curve.rzLeft[i] = left >= 0 ? rhs[left]! : 0;
+    curve.rzRight[i] = right >= 0 ? rhs[right]! : 0;
+  }
+}
+
+function solveBasis(context: Context, basis: BasisLoads, curve: Curve, scratch: Scratch): Curve {
+  const { grid, dofs, sections, lengths, system } = context;
+  const nSeg = sections.length;
+  const { particular, state, rhs, loads, correction, settled, startV, startM, endV, endM } = scratch;
+  assembleLoads(context, basis, scratch);
   // The residual below uses the full nodal displacements, so it takes the loads before the
   // settlements are moved to the right-hand side as −K_fr·u_r.
-  const loads = Float64Array.from(rhs);
-  const settled = new Float64Array(model.nodes.length);
+  loads.set(rhs);
+  settled.fill(0);
   for (const { node, uy } of basis.settlements) settled[node]! += uy;
   for (const node of new Set(basis.settlements.map((s) => s.node))) {
     for (const [e, local] of [
@@ -136,32 +209,21 @@ function solveBasis(context: Context, basis: BasisLoads): Curve {
     ] as const) {
       if (e < 0 || e >= nSeg) continue;
       const map = elementDofs(dofs, e);
-      for (let a = 0; a < 4; a++) add(map[a]!, -system.elements[16 * e + 4 * a + local]! * settled[node]!);
+      for (let a = 0; a < 4; a++) addToFree(rhs, map[a]!, -system.elements[16 * e + 4 * a + local]! * settled[node]!);
     }
   }
   solveFactored(context.factors, rhs);
-  const curve = emptyCurve(context);
-  const readNodes = () => {
-    const value = (dof: number) => (dof >= 0 ? rhs[dof]! : 0);
-    for (let i = 0; i < model.nodes.length; i++) {
-      curve.uy[i] = dofs.uy[i]! >= 0 ? rhs[dofs.uy[i]!]! : settled[i]!;
-      curve.rzLeft[i] = value(dofs.rzLeft[i]!);
-      curve.rzRight[i] = value(dofs.rzRight[i]!);
-    }
-  };
-  readNodes();
+  readNodalValues(context, scratch, curve);
   for (let step = 0; step < REFINEMENT_STEPS; step++) {
-    const correction = residual(context, curve, loads);
+    residual(context, curve, loads, correction);
     solveFactored(context.factors, correction);
     for (let d = 0; d < rhs.length; d++) rhs[d]! += correction[d]!;
-    readNodes();
+    readNodalValues(context, scratch, curve);
   }
-  const startV = new Float64Array(nSeg + 1);
-  const startM = new Float64Array(nSeg + 1);
-  const endV = new Float64Array(nSeg + 1);
-  const endM = new Float64Array(nSeg + 1);
+  endV[0] = 0;
+  endM[0] = 0;
   for (let e = 0; e < nSeg; e++) {
-    const { V0, M0 } = solveStartForces(lengths[e]!, sections[e]!, particular.subarray(4 * e, 4 * e + 4), curve.uy[e]!, curve.rzRight[e]!, curve.uy[e + 1]!, curve.rzLeft[e + 1]!);
+    const { V0, M0 } = solveStartForces(lengths[e]!, sections[e]!, particular, curve.uy[e]!, curve.rzRight[e]!, curve.uy[e + 1]!, curve.rzLeft[e + 1]!, 4 * e);
     startV[e] = V0;
     startM[e] = M0;
   }
@@ -191,9 +253,9 @@ const REFINEMENT_STEPS = 1;
  * (end rotations relative to the chord) so the rigid-body part cancels exactly and the residual
  * is accurate even where K·u is a small difference of large terms.
  */
-function residual(context: Context, curve: Curve, loads: Float64Array): Float64Array {
+function residual(context: Context, curve: Curve, loads: Float64Array, r: Float64Array): void {
   const { model, dofs, lengths, system } = context;
-  const r = Float64Array.from(loads);
+  r.set(loads);
   for (let e = 0; e < lengths.length; e++) {
     const chord = (curve.uy[e + 1]! - curve.uy[e]!) / lengths[e]!;
     const phi1 = curve.rzRight[e]! - chord;
@@ -205,12 +267,12 @@ function residual(context: Context, curve: Curve, loads: Float64Array): Float64A
       r[map[a]!]! -= k[16 * e + 4 * a + 1]! * phi1 + k[16 * e + 4 * a + 3]! * phi2;
     }
   }
-  model.nodes.forEach((node, i) => {
-    if (node.support?.type !== "spring") return;
-    if (dofs.uy[i]! >= 0) r[dofs.uy[i]!]! -= (node.support.ky ?? 0) * curve.uy[i]!;
-    if (dofs.rzLeft[i]! >= 0) r[dofs.rzLeft[i]!]! -= (node.support.kr ?? 0) * curve.rzLeft[i]!;
-  });
-  return r;
+  for (let i = 0; i < model.nodes.length; i++) {
+    const support = model.nodes[i]!.support;
+    if (support?.type !== "spring") continue;
+    if (dofs.uy[i]! >= 0) r[dofs.uy[i]!]! -= (support.ky ?? 0) * curve.uy[i]!;
+    if (dofs.rzLeft[i]! >= 0) r[dofs.rzLeft[i]!]! -= (support.kr ?? 0) * curve.rzLeft[i]!;
+  }
 }
 
 /**

@@ -104,14 +104,15 @@ export function solveStartForces(
   rz0: number,
   uyL: number,
   rzL: number,
+  at = 0,
 ): { V0: number; M0: number } {
   const L = length;
   const EI = section.EI;
   // Both equations multiplied by EI to keep the coefficients of similar size.
-  const r1 = (rzL - rz0 - particular[2]!) * EI;
+  const r1 = (rzL - rz0 - particular[at + 2]!) * EI;
   // uyL − uy0 − rz0·L via the chord rotation: the rigid-body part cancels before rounding.
   const chord = (uyL - uy0) / L;
-  const r2 = ((chord - rz0) * L - particular[3]!) * EI;
+  const r2 = ((chord - rz0) * L - particular[at + 3]!) * EI;
   const a11 = L;
   const a12 = 0.5 * L * L;
   const a22 = (L * L * L) / 6 - section.shearFlexibility * EI * L;
