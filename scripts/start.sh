@@ -12,6 +12,10 @@ bash scripts/db.sh start
 bash scripts/db.sh createdb spanwright
 export DATABASE_URL=${DATABASE_URL:-$(bash scripts/db.sh url spanwright)}
 export NODE_ENV=${NODE_ENV:-production}
+# the local demo hands off through the built-in mail catcher (127.0.0.1) and shows its outbox;
+# for a real mail server set SMTP_MODE=smtp and SMTP_HOST/SMTP_PORT/SMTP_USER/SMTP_PASS/SMTP_FROM
+export SMTP_MODE=${SMTP_MODE:-catcher}
+export OUTBOX_ENABLED=${OUTBOX_ENABLED:-true}
 
 api_pid=
 cleanup() {

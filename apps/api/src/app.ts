@@ -24,6 +24,15 @@ import { registerMemberRoutes } from "./members/members.routes.js";
 import { createMembersService } from "./members/members.service.js";
 import { registerProjectRoutes } from "./projects/projects.routes.js";
 import { createProjectsService } from "./projects/projects.service.js";
+import { registerExportRoutes } from "./exports/exports.routes.js";
+import { registerHandoffRoutes } from "./handoffs/handoffs.routes.js";
+import { createHandoffsService } from "./handoffs/handoffs.service.js";
+import { registerImportRoutes } from "./imports/imports.routes.js";
+import { createImportsService } from "./imports/imports.service.js";
+import { createMailer, type Mailer } from "./mail/mailer.js";
+import { registerOutboxRoutes } from "./outbox/outbox.routes.js";
+import { registerReactionRoutes } from "./revisions/reactions.routes.js";
+import { createReactionsService } from "./revisions/reactions.service.js";
 import { registerRevisionRoutes } from "./revisions/revisions.routes.js";
 import { createRevisionsService } from "./revisions/revisions.service.js";
 import type { Engine } from "./solve/engine.js";
@@ -35,19 +44,26 @@ export interface AppDeps {
   engine: Engine;
   clock?: Clock;
   logger?: Logger;
+  /** Hand-off mail; default from `config.mail` (the local catcher outside production). The app's owner closes it. */
+  mailer?: Mailer;
 }
 
-export function createServices(deps: { database: Database; engine: Engine; clock: Clock }) {
-  const { database, engine, clock } = deps;
+export function createServices(deps: { database: Database; engine: Engine; clock: Clock; mailer: Mailer; publicUrl: string; logger?: Logger }) {
+  const { database, engine, clock, mailer } = deps;
   const db = database.db;
   const auth = createAuthService({ db, clock });
   const beams = createBeamsService({ db, clock, engine });
+  const revisions = createRevisionsService({ db, clock, engine, beams });
   return {
     auth,
     projects: createProjectsService({ db, clock }),
     members: createMembersService({ db }),
     beams,
-    revisions: createRevisionsService({ db, clock, engine, beams }),
+    revisions,
+    reactions: createReactionsService({ db }),
+    imports: createImportsService({ db, beams, revisions }),
+    handoffs: createHandoffsService({ db, clock, beams, mailer, publicUrl: deps.publicUrl, ...(deps.logger ? { logger: deps.logger } : {}) }),
+    mailer,
   };
 }
 
@@ -77,8 +93,14 @@ function createApiRouter(deps: AppDeps, services: Services): Router {
   registerSolveRoutes(router, deps.engine);
   registerProjectRoutes(router, services.projects);
   registerMemberRoutes(router, services.members);
+  registerImportRoutes(router, services.imports);
   registerBeamRoutes(router, services.beams);
+  // compare first: "…/revisions/compare" must not be read as a version
+  registerReactionRoutes(router, services.reactions);
   registerRevisionRoutes(router, services.revisions);
+  registerExportRoutes(router, database.db);
+  registerHandoffRoutes(router, services.handoffs);
+  registerOutboxRoutes(router, { db: database.db, mailer: services.mailer, enabled: config.outboxEnabled });
   return router;
 }
 
@@ -98,7 +120,8 @@ export function createApp(deps: AppDeps): { app: Express; services: Services; ap
   const { config } = deps;
   const clock = deps.clock ?? systemClock;
   const logger = deps.logger ?? pino({ level: config.logLevel });
-  const services = createServices({ database: deps.database, engine: deps.engine, clock });
+  const mailer = deps.mailer ?? createMailer(config.mail);
+  const services = createServices({ database: deps.database, engine: deps.engine, clock, mailer, publicUrl: config.publicUrl, logger });
 
   const app = express();
   app.disable("x-powered-by");

@@ -23,6 +23,20 @@ const envSchema = z.object({
   WEB_DIST_DIR: z.string().default(path.resolve(here, "../../web/dist")),
   SERVE_WEB: z.enum(["true", "false"]).optional(),
   LOG_LEVEL: z.enum(["fatal", "error", "warn", "info", "debug", "trace", "silent"]).default("info"),
+  /** `catcher`: the API starts the local SMTP fake on 127.0.0.1 (default outside production). */
+  SMTP_MODE: z.enum(["catcher", "smtp"]).optional(),
+  SMTP_HOST: z.string().optional(),
+  /** For `smtp`: the server's port (default 587). For `catcher`: its port, 0 = any free port. */
+  SMTP_PORT: z.coerce.number().int().min(0).max(65535).optional(),
+  SMTP_USER: z.string().optional(),
+  SMTP_PASS: z.string().optional(),
+  /** TLS from the first byte (port 465); otherwise STARTTLS when the server offers it. */
+  SMTP_SECURE: z.enum(["true", "false"]).default("false"),
+  SMTP_FROM: z.string().default("Spanwright <handoffs@spanwright.test>"),
+  /** The outbox page of caught messages; on by default outside production. */
+  OUTBOX_ENABLED: z.enum(["true", "false"]).optional(),
+  /** Base of links in e-mails (the revision a hand-off points at). */
+  PUBLIC_URL: z.string().url().optional(),
 });
 
 export interface Config {
@@ -38,6 +52,37 @@ export interface Config {
   readonly webDistDir: string;
   readonly serveWeb: boolean;
   readonly logLevel: string;
+  readonly mail: MailConfig;
+  readonly outboxEnabled: boolean;
+  /** No trailing slash. */
+  readonly publicUrl: string;
+}
+
+export type MailConfig =
+  | { readonly mode: "catcher"; readonly port: number; readonly from: string }
+  | {
+      readonly mode: "smtp";
+      /** Unset: hand-offs answer 502 `mail-failed` until SMTP_HOST is given. */
+      readonly host: string | null;
+      readonly port: number;
+      readonly secure: boolean;
+      readonly user: string | null;
+      readonly pass: string | null;
+      readonly from: string;
+    };
+
+function parseMail(e: z.infer<typeof envSchema>): MailConfig {
+  const mode = e.SMTP_MODE ?? (e.NODE_ENV === "production" ? "smtp" : "catcher");
+  if (mode === "catcher") return { mode, port: e.SMTP_PORT ?? 0, from: e.SMTP_FROM };
+  return {
+    mode,
+    host: e.SMTP_HOST || null,
+    port: e.SMTP_PORT ?? 587,
+    secure: e.SMTP_SECURE === "true",
+    user: e.SMTP_USER || null,
+    pass: e.SMTP_PASS || null,
+    from: e.SMTP_FROM,
+  };
 }
 
 function parseTrustProxy(value: string): boolean | number | string {
@@ -67,5 +112,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     webDistDir: e.WEB_DIST_DIR,
     serveWeb: e.SERVE_WEB ? e.SERVE_WEB === "true" : e.NODE_ENV === "production",
     logLevel: e.LOG_LEVEL,
+    mail: parseMail(e),
+    outboxEnabled: e.OUTBOX_ENABLED ? e.OUTBOX_ENABLED === "true" : e.NODE_ENV !== "production",
+    publicUrl: (e.PUBLIC_URL ?? `http://${e.HOST}:${e.PORT}`).replace(/\/+$/, ""),
   };
 }

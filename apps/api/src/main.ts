@@ -2,12 +2,21 @@ import { pino } from "pino";
 import { createApp } from "./app.js";
 import { loadConfig } from "./config.js";
 import { connectDatabase } from "./db/client.js";
+import { createMailer } from "./mail/mailer.js";
 import { solverEngine } from "./solve/solverEngine.js";
 
 const config = loadConfig();
 const logger = pino({ level: config.logLevel });
 const database = connectDatabase(config.databaseUrl);
-const { app } = createApp({ config, database, engine: solverEngine, logger });
+const mailer = createMailer(config.mail);
+if (config.mail.mode === "catcher") {
+  await mailer.start();
+  const { port } = await mailer.transport();
+  logger.info(`local mail catcher (hand-offs, outbox) on 127.0.0.1:${port}`);
+} else if (!config.mail.host) {
+  logger.warn("SMTP_HOST is not set: hand-offs will fail until it is");
+}
+const { app } = createApp({ config, database, engine: solverEngine, logger, mailer });
 
 const server = app.listen(config.port, config.host, () => {
   logger.info(`Spanwright is listening on http://${config.host}:${config.port}`);
@@ -16,7 +25,7 @@ const server = app.listen(config.port, config.host, () => {
 function shutdown(signal: string): void {
   logger.info({ signal }, "shutting down");
   server.close(() => {
-    void database.close().finally(() => process.exit(0));
+    void Promise.allSettled([mailer.close(), database.close()]).finally(() => process.exit(0));
   });
   setTimeout(() => process.exit(0), 5000).unref();
 }

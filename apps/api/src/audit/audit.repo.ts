@@ -15,7 +15,8 @@ export type AuditAction =
   | "beam.renamed"
   | "beam.deleted"
   | "revision.saved"
-  | "revision.checked";
+  | "revision.checked"
+  | "revision.issued";
 
 export async function recordAudit(
   db: Db,

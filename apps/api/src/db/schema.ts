@@ -131,10 +131,11 @@ export const beamRevisions = pgTable(
     index("beam_revisions_checked_by_idx").on(t.checkedById),
     check("beam_revisions_version_check", sql`${t.version} >= 1`),
     check("beam_revisions_status_check", sql`${t.status} in ('draft', 'checked', 'issued')`),
-    // a checked (or issued) revision records who checked it and when
+    // a draft has no checker; a checked revision records who checked it and when; an issued one
+    // may have been checked first or issued straight from draft (the hand-off makes it immutable)
     check(
       "beam_revisions_checked_check",
-      sql`(${t.status} = 'draft') = (${t.checkedById} is null and ${t.checkedAt} is null)`,
+      sql`(${t.status} <> 'draft' or (${t.checkedById} is null and ${t.checkedAt} is null)) and (${t.status} <> 'checked' or (${t.checkedById} is not null and ${t.checkedAt} is not null))`,
     ),
   ],
 );
@@ -163,5 +164,54 @@ export const auditEvents = pgTable(
   (t) => [
     index("audit_events_project_id_idx").on(t.projectId, t.createdAt),
     index("audit_events_actor_id_idx").on(t.actorId),
+  ],
+);
+
+/**
+ * A revision's reaction table e-mailed to the foundation designer. Written only after the SMTP
+ * server accepted the message, so every row stands for a mail that left (`message_id`).
+ */
+export const handoffs = pgTable(
+  "handoffs",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    projectId: uuid("project_id")
+      .notNull()
+      .references(() => projects.id, { onDelete: "cascade" }),
+    beamId: uuid("beam_id")
+      .notNull()
+      .references(() => beams.id, { onDelete: "cascade" }),
+    revisionId: uuid("revision_id")
+      .notNull()
+      .references(() => beamRevisions.id, { onDelete: "cascade" }),
+    issuedById: uuid("issued_by")
+      .notNull()
+      .references(() => users.id, { onDelete: "restrict" }),
+    message: text("message"),
+    messageId: text("message_id").notNull(),
+    createdAt: createdAt(),
+  },
+  (t) => [
+    index("handoffs_project_id_idx").on(t.projectId, t.createdAt),
+    index("handoffs_beam_id_idx").on(t.beamId, t.createdAt),
+    index("handoffs_revision_id_idx").on(t.revisionId),
+    index("handoffs_issued_by_idx").on(t.issuedById),
+  ],
+);
+
+/** Who received a hand-off: an address, and the member it belonged to when it was sent. */
+export const handoffRecipients = pgTable(
+  "handoff_recipients",
+  {
+    handoffId: uuid("handoff_id")
+      .notNull()
+      .references(() => handoffs.id, { onDelete: "cascade" }),
+    /** Lower-cased, as sent. */
+    email: text("email").notNull(),
+    userId: uuid("user_id").references(() => users.id, { onDelete: "set null" }),
+  },
+  (t) => [
+    primaryKey({ name: "handoff_recipients_pkey", columns: [t.handoffId, t.email] }),
+    index("handoff_recipients_user_id_idx").on(t.userId),
   ],
 );

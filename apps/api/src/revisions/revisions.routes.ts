@@ -12,7 +12,7 @@ import { AppError } from "../http/appError.js";
 import { parseRequest } from "../http/validate.js";
 import type { RevisionsService } from "./revisions.service.js";
 
-function parseVersion(value: unknown): number {
+export function parseVersion(value: unknown): number {
   const n = typeof value === "string" && /^[1-9]\d{0,8}$/.test(value) ? Number(value) : NaN;
   if (!Number.isInteger(n)) throw new AppError("not-found", "revision not found");
   return n;

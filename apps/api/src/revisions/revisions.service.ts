@@ -7,6 +7,8 @@ import type { Clock } from "../clock.js";
 import { inTransaction, type Db } from "../db/client.js";
 import { AppError } from "../http/appError.js";
 import { runSolver, type Engine } from "../solve/engine.js";
+import { summariseRevisionChange } from "./changeSummary.js";
+import { asBeamModel, findProjectInfo } from "./revisionContext.js";
 import * as repo from "./revisions.repo.js";
 
 export function createRevisionsService(deps: { db: Db; clock: Clock; engine: Engine; beams: BeamsService }) {
@@ -44,6 +46,15 @@ export function createRevisionsService(deps: { db: Db; clock: Clock; engine: Eng
       const result = runSolver(engine, input.model);
       const now = clock.now();
       const version = input.baseVersion + 1;
+      // the diff is against the edited revision; if it is not the latest, the save below conflicts
+      const base = await repo.findRevision(db, beamId, input.baseVersion);
+      const project = await findProjectInfo(db, projectId);
+      const changeSummary = summariseRevisionChange(
+        base ? asBeamModel(base.model) : null,
+        asBeamModel(input.model),
+        project?.unitSystem ?? "si",
+        input.changeSummary,
+      );
       const saved = await inTransaction(db, async (tx) => {
         if (!(await advanceVersion(tx, beamId, input.baseVersion, now))) return false;
         await repo.insertRevisionWithResult(tx, {
@@ -52,7 +63,7 @@ export function createRevisionsService(deps: { db: Db; clock: Clock; engine: Eng
           model: input.model,
           result,
           authorId: actorId,
-          changeSummary: input.changeSummary,
+          changeSummary,
           now,
         });
         await recordAudit(tx, { projectId, actorId, action: "revision.saved", details: { beamId, version } });

@@ -23,7 +23,12 @@ describe("revisions", () => {
     const { owner, base, beamPath } = await beamWithTeam();
     const res = await owner.client.post(base, { baseVersion: 1, model: twoSpanModel(-20_000), changeSummary: "heavier partition" });
     expect(res.status).toBe(201);
-    expect(res.body.revision).toMatchObject({ version: 2, changeSummary: "heavier partition", status: "draft" });
+    // the author's note, then the server's summary of the model diff against revision 1
+    expect(res.body.revision).toMatchObject({
+      version: 2,
+      changeSummary: "heavier partition: D: -10 kN/m -> -20 kN/m on spans 1-2 (x = 0..10 m)",
+      status: "draft",
+    });
     // twice the load, twice the reaction (linear elastic)
     expect(res.body.revision.result.results.D.reactions[0].fy).toBeCloseTo(37_500, 6);
     const first = (await owner.client.get(`${base}/1`)).body.revision;

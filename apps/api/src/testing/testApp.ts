@@ -63,6 +63,7 @@ export async function createTestApp(options: { env?: Record<string, string>; eng
       return { client: c, userId: res.body.user.id as string, email, password };
     },
     async close() {
+      await services.mailer.close();
       await database.close();
       await testDatabase.drop();
     },

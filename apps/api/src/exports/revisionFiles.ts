@@ -1,0 +1,47 @@
+import {
+  buildReactionTable,
+  exportFileName,
+  reactionTableCsv,
+  reactionTableSiCsv,
+  renderCalculationReport,
+} from "@spanwright/handoff";
+import type { RevisionContext } from "../revisions/revisionContext.js";
+
+export interface RevisionFile {
+  filename: string;
+  contentType: string;
+  content: Buffer;
+}
+
+export type CsvUnits = "project" | "si";
+
+/** The reaction table as CSV: in the project's units for people, or SI at full precision for scripts. */
+export function revisionCsv(ctx: RevisionContext, units: CsvUnits): RevisionFile {
+  const table = buildReactionTable(ctx.model, ctx.result);
+  const text = units === "si" ? reactionTableSiCsv(table) : reactionTableCsv(table, { units: ctx.project.unitSystem });
+  return {
+    filename: exportFileName(ctx.beam.name, ctx.revision.version, units === "si" ? "reactions-si.csv" : "reactions.csv"),
+    contentType: "text/csv; charset=utf-8",
+    content: Buffer.from(text, "utf8"),
+  };
+}
+
+/** The calculation report. Dated with the revision's time, so the same revision gives the same bytes. */
+export async function revisionPdf(ctx: RevisionContext): Promise<RevisionFile> {
+  const content = await renderCalculationReport({
+    project: ctx.project.name,
+    beam: ctx.beam.name,
+    revision: ctx.revision.version,
+    author: ctx.revision.author.name,
+    checker: ctx.revision.checkedBy?.name ?? null,
+    date: new Date(ctx.revision.createdAt),
+    units: ctx.project.unitSystem,
+    model: ctx.model,
+    result: ctx.result,
+  });
+  return {
+    filename: exportFileName(ctx.beam.name, ctx.revision.version, "report.pdf"),
+    contentType: "application/pdf",
+    content,
+  };
+}
