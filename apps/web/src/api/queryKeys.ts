@@ -10,4 +10,11 @@ export const queryKeys = {
     ["projects", projectId, "beams", beamId, "revisions"] as const,
   revision: (projectId: string, beamId: string, version: number) =>
     ["projects", projectId, "beams", beamId, "revisions", version] as const,
+  reactions: (projectId: string, beamId: string, version: number) =>
+    ["projects", projectId, "beams", beamId, "revisions", version, "reactions"] as const,
+  compare: (projectId: string, beamId: string, from: number, to: number) =>
+    ["projects", projectId, "beams", beamId, "compare", from, to] as const,
+  projectHandoffs: (projectId: string) => ["projects", projectId, "handoffs"] as const,
+  beamHandoffs: (projectId: string, beamId: string) => ["projects", projectId, "beams", beamId, "handoffs"] as const,
+  outbox: ["outbox"] as const,
 };

@@ -1,5 +1,7 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import {
+  compareResponseSchema,
+  reactionTableResponseSchema,
   revisionListResponseSchema,
   revisionResponseSchema,
   routePath,
@@ -88,4 +90,41 @@ export function versionConflictOf(error: unknown): VersionConflictDetails | null
   if (!isApiError(error) || error.code !== "version-conflict") return null;
   const parsed = versionConflictDetailsSchema.safeParse(error.details);
   return parsed.success ? parsed.data : null;
+}
+
+/** The reaction table of one revision, SI values with the project's display units beside them. */
+export function useReactions(projectId: string, beamId: string, version: number) {
+  return useQuery({
+    queryKey: queryKeys.reactions(projectId, beamId, version),
+    queryFn: ({ signal }) =>
+      request(routePath("getReactions", { projectId, beamId, version }), {
+        signal,
+        parse: (d) => reactionTableResponseSchema.parse(d),
+      }),
+    // Stored results of a saved revision never change.
+    staleTime: 5 * 60_000,
+  });
+}
+
+export function useCompareRevisions(projectId: string, beamId: string, from: number, to: number) {
+  return useQuery({
+    queryKey: queryKeys.compare(projectId, beamId, from, to),
+    queryFn: ({ signal }) =>
+      request(`${routePath("compareRevisions", { projectId, beamId })}?from=${from}&to=${to}`, {
+        signal,
+        parse: (d) => compareResponseSchema.parse(d),
+      }),
+    enabled: Number.isInteger(from) && Number.isInteger(to) && from > 0 && to > 0,
+  });
+}
+
+export type CsvUnits = "project" | "si";
+
+/** Download links: plain GETs the browser follows with the session cookie. */
+export function reactionsCsvUrl(projectId: string, beamId: string, version: number, units: CsvUnits): string {
+  return `${routePath("getReactionsCsv", { projectId, beamId, version })}?units=${units}`;
+}
+
+export function reportPdfUrl(projectId: string, beamId: string, version: number): string {
+  return routePath("getReportPdf", { projectId, beamId, version });
 }
