@@ -21,7 +21,13 @@ interface Fixture {
 interface Call {
   params: Record<string, string | number>;
   body?: unknown;
+  /** Query string without "?". */
+  query?: string;
+  /** For multipart routes: the file in the field `file` and text fields. */
+  upload?: { file: { name: string; content: string }; fields?: Record<string, string> };
 }
+
+const scheduleCsv = "case,type,position,magnitude\nD,point,2 m,-10 kN\n";
 
 /** How to call each route successfully. Typed over every route name, so a new route needs an entry. */
 const calls: Record<RouteName, (f: Fixture) => Call> = {
@@ -50,6 +56,23 @@ const calls: Record<RouteName, (f: Fixture) => Call> = {
   saveRevision: (f) => ({ params: { projectId: f.projectId, beamId: f.beamId }, body: { baseVersion: 1, model: twoSpanModel(-2e4) } }),
   getRevision: (f) => ({ params: { projectId: f.projectId, beamId: f.beamId, version: 1 } }),
   checkRevision: (f) => ({ params: { projectId: f.projectId, beamId: f.beamId, version: 1 }, body: { comment: "ok" } }),
+  compareRevisions: (f) => ({ params: { projectId: f.projectId, beamId: f.beamId }, query: "from=1&to=1" }),
+  getReactions: (f) => ({ params: { projectId: f.projectId, beamId: f.beamId, version: 1 } }),
+  getReactionsCsv: (f) => ({ params: { projectId: f.projectId, beamId: f.beamId, version: 1 }, query: "units=si" }),
+  getReportPdf: (f) => ({ params: { projectId: f.projectId, beamId: f.beamId, version: 1 } }),
+  importBeam: (f) => ({ params: { projectId: f.projectId }, upload: { file: { name: "beam.json", content: JSON.stringify(twoSpanModel()) } } }),
+  previewLoadSchedule: (f) => ({ params: { projectId: f.projectId, beamId: f.beamId }, upload: { file: { name: "loads.csv", content: scheduleCsv } } }),
+  applyLoadSchedule: (f) => ({
+    params: { projectId: f.projectId, beamId: f.beamId },
+    upload: { file: { name: "loads.csv", content: scheduleCsv }, fields: { baseVersion: "1" } },
+  }),
+  createHandoff: (f) => ({
+    params: { projectId: f.projectId, beamId: f.beamId, version: 1 },
+    body: { recipients: [{ email: "foundations@groundwork.example" }] },
+  }),
+  listProjectHandoffs: (f) => ({ params: { projectId: f.projectId } }),
+  listBeamHandoffs: (f) => ({ params: { projectId: f.projectId, beamId: f.beamId } }),
+  outbox: () => ({ params: {} }),
 };
 
 /**
@@ -63,7 +86,7 @@ const allowed = {
   check: ["checker"],
   manage: ["owner"],
 } as const;
-const expectedAccess: Record<RouteName, "public" | "signed-in" | keyof typeof allowed> = {
+const expectedAccess: Record<RouteName, "public" | "signed-in" | "owner-of-any-project" | keyof typeof allowed> = {
   health: "public",
   signUp: "public",
   signIn: "public",
@@ -89,14 +112,32 @@ const expectedAccess: Record<RouteName, "public" | "signed-in" | keyof typeof al
   saveRevision: "edit",
   getRevision: "read",
   checkRevision: "check",
+  compareRevisions: "read",
+  getReactions: "read",
+  getReactionsCsv: "read",
+  getReportPdf: "read",
+  importBeam: "edit",
+  previewLoadSchedule: "edit",
+  applyLoadSchedule: "edit",
+  createHandoff: "edit",
+  listProjectHandoffs: "read",
+  listBeamHandoffs: "read",
+  outbox: "owner-of-any-project",
 };
 
-function expectedStatus(name: RouteName, actor: Actor): number {
+/** Whether the actor owns a project now (createProject cases make every actor an owner somewhere). */
+async function ownsAnyProject(actor: Actor): Promise<boolean> {
+  if (actor === "anonymous") return false;
+  return (await t.services.projects.list(ids[actor])).some((p) => p.role === "owner");
+}
+
+async function expectedStatus(name: RouteName, actor: Actor): Promise<number> {
   const access = expectedAccess[name];
   const success = apiRoutes[name].status;
   if (access === "public") throw new Error("public routes are not in the matrix");
   if (actor === "anonymous") return 401;
   if (access === "signed-in") return success;
+  if (access === "owner-of-any-project") return (await ownsAnyProject(actor)) ? success : 403;
   if (actor === "outsider") return 404;
   return (allowed[access] as readonly string[]).includes(actor) ? success : 403;
 }
@@ -140,8 +181,13 @@ afterAll(() => t.close());
 function send(actor: Actor, name: RouteName, call: Call) {
   const route = apiRoutes[name];
   const client = actor === "anonymous" ? t.client() : clients[actor];
-  const path = routePath(name, call.params);
+  const path = routePath(name, call.params) + (call.query ? `?${call.query}` : "");
   const method = route.method.toLowerCase() as "get" | "post" | "patch" | "delete";
+  if (call.upload) {
+    let req = client.agent.post(path).set("Origin", client.origin);
+    for (const [key, value] of Object.entries(call.upload.fields ?? {})) req = req.field(key, value);
+    return req.attach("file", Buffer.from(call.upload.file.content), call.upload.file.name);
+  }
   return client.send(method, path, method === "get" || method === "delete" ? undefined : call.body);
 }
 
@@ -170,7 +216,7 @@ describe.each(guarded)("%s", (name) => {
   it.each(actors)("answers %s as the role rules say", async (actor) => {
     const fixture = apiRoutes[name].method === "GET" ? shared : await createFixture();
     const res = await send(actor, name, calls[name](fixture));
-    const expected = expectedStatus(name, actor);
+    const expected = await expectedStatus(name, actor);
     expect({ status: res.status, code: res.body?.error?.code }).toMatchObject({ status: expected });
     if (expected === 401) expect(res.body.error.code).toBe("unauthenticated");
     if (expected === 403) expect(res.body.error.code).toBe("forbidden");
@@ -191,7 +237,7 @@ describe("ids from another project", () => {
     const fixture = await createFixture();
     const mixed: Fixture = { projectId: fixture.projectId, beamId: foreign.beamId, extraUserId: foreign.extraUserId };
     const access = apiRoutes[name].access;
-    const allowed = (["owner", "engineer", "checker", "viewer"] as const).find((r) => access === "signed-in" || access === "public" || can(r, access))!;
+    const allowed = (["owner", "engineer", "checker", "viewer"] as const).find((r) => access === "signed-in" || access === "public" || access === "owner-of-any-project" || can(r, access))!;
     const res = await send(allowed, name, calls[name](mixed));
     expect(res.status).toBe(404);
     expect(res.body.error.code).toBe("not-found");
