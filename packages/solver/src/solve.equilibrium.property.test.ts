@@ -12,7 +12,7 @@ import { caseResult, envelope, expectClose, type CaseResult, type SolveOutput, t
 import { combinedScale, quantityScale } from "./testing/scales";
 import { loadResultant, reactionResultant } from "./testing/statics";
 
-const RUNS = 150;
+const RUNS = 100;
 
 const twoCaseModel = beamShapeArb().chain((shape) =>
   fc.record({

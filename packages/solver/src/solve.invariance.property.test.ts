@@ -10,7 +10,7 @@ import { beamShapeArb, loadsArb, stationsArb, toModel, type BeamShape } from "./
 import { combinedScale, quantityScale } from "./testing/scales";
 import { caseResult, expectClose, stationAt, type BeamModel, type LoadSpec, type SolveOutput } from "./testing/exchange";
 
-const RUNS = 120;
+const RUNS = 100;
 
 /** A point strictly inside the beam that is not a node (rotation is single-valued there). */
 function interiorPoint(shape: BeamShape, t: number): number {

@@ -65,7 +65,7 @@ describe("solve on arbitrary input", () => {
         setAt(copy, path, replacement);
         expectResultOrSolverError(copy);
       }),
-      { numRuns: 1500 },
+      { numRuns: 1000 },
     );
   }, TIMEOUT);
 });
