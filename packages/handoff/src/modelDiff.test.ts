@@ -108,6 +108,16 @@ describe("diffModels", () => {
     expect(diffModels(base, after).changes.map((c) => c.kind)).toEqual(["case-removed", "combination-removed"]);
   });
 
+  it("finds no change in a model whose keys come back reordered (as from PostgreSQL jsonb)", () => {
+    const reorder = (value: unknown): unknown =>
+      Array.isArray(value)
+        ? value.map(reorder)
+        : value && typeof value === "object"
+          ? Object.fromEntries(Object.entries(value).reverse().map(([k, v]) => [k, reorder(v)]))
+          : value;
+    expect(diffModels(base, reorder(base) as BeamModel).changes).toEqual([]);
+  });
+
   it("does not mutate its inputs", () => {
     const before = structuredClone(base);
     const after = edit((m) => m.loadCases[0]!.loads.push({ type: "moment", x: 1, mz: 5 }));

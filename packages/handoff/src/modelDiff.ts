@@ -32,8 +32,15 @@ export interface ModelDiff {
 // Positions typed in different units round-trip through floating point; 1 µm is "the same place".
 const SAME_X = 1e-6;
 
+/** Plain-data equality regardless of key order: a model read back from PostgreSQL jsonb has its keys reordered. */
 function same(a: unknown, b: unknown): boolean {
-  return JSON.stringify(a) === JSON.stringify(b);
+  if (a === b) return true;
+  if (typeof a !== "object" || typeof b !== "object" || a === null || b === null) return false;
+  if (Array.isArray(a) !== Array.isArray(b)) return false;
+  const ka = Object.keys(a);
+  const kb = Object.keys(b);
+  if (ka.length !== kb.length) return false;
+  return ka.every((k) => Object.prototype.hasOwnProperty.call(b, k) && same((a as Record<string, unknown>)[k], (b as Record<string, unknown>)[k]));
 }
 
 function diffNodes(before: BeamModel, after: BeamModel, out: ModelChange[]): void {
