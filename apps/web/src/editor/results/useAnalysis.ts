@@ -1,5 +1,5 @@
 import { useEffect, useMemo, useRef, useState } from "react";
-import { tryAnalyze, type Analysis } from "@spanwright/solver";
+import type { Analysis } from "@spanwright/solver";
 import type { BeamDocument } from "../model/BeamDocument";
 import { toExchange } from "../model/exchange";
 import type { SolveFailure, SolveRequest, SolveResponse } from "./solveMessages";
@@ -22,7 +22,8 @@ function solverInput(doc: BeamDocument) {
 
 /**
  * Solves the document on every change in a Web Worker (the newest request wins; stale answers are
- * dropped). Where workers are missing (component tests) it solves synchronously instead.
+ * dropped). There is deliberately no main-thread fallback: it would pull the whole engine (and its
+ * matrix library) into the editor chunk, which only needs the engine's result readers.
  */
 export function useAnalysis(doc: BeamDocument): AnalysisState {
   const input = solverInput(doc);
@@ -52,8 +53,7 @@ export function useAnalysis(doc: BeamDocument): AnalysisState {
       worker.current.postMessage(request);
       return;
     }
-    const result = tryAnalyze(model);
-    setState(toState(result.ok ? { seq: request.seq, ok: true, analysis: result.value } : { seq: request.seq, ok: false, error: result.error }));
+    setState({ status: "failed", analysis: null, error: { code: "internal", message: "This browser cannot run the engine in the background (no Web Worker support).", where: "" } });
   }, [model]);
 
   return state;
