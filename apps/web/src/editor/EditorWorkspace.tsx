@@ -6,6 +6,7 @@ import { ResultsPanel } from "./results/ResultsPanel";
 import { EditorCanvas } from "./view/EditorCanvas";
 import { Palette } from "./view/Palette";
 import { CaseFilter } from "./view/CaseFilter";
+import { GridStepField } from "./view/GridStepField";
 import { Inspector } from "./view/Inspector";
 import { useShortcuts } from "./view/useShortcuts";
 import { NodesTable } from "./tables/NodesTable";
@@ -39,7 +40,10 @@ export function EditorWorkspace() {
     <div className="space-y-3">
       <div className="flex flex-wrap items-center justify-between gap-2">
         <Palette />
-        <CaseFilter />
+        <div className="flex flex-wrap items-center gap-4">
+          <CaseFilter />
+          <GridStepField />
+        </div>
       </div>
       {notice && (
         <div role={notice.tone === "error" ? "alert" : "status"} className={`flex items-center justify-between rounded-md px-3 py-1.5 text-sm ${notice.tone === "error" ? "bg-danger-50 text-danger-700" : "bg-paper-100 text-paper-700"}`}>

@@ -58,6 +58,7 @@ export function QuantityInput({ value, kind, units, onCommit, onClear, label, cl
           error ? "border-danger-600 bg-danger-50" : "border-paper-300 bg-white"
         }`}
         value={text}
+        data-pending={text !== shown}
         onChange={(e) => setText(e.target.value)}
         onBlur={commit}
         onKeyDown={(e) => {

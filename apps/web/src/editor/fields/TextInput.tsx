@@ -22,6 +22,7 @@ export function TextInput({
       aria-label={label}
       className="w-full min-w-0 rounded-sm border border-paper-300 bg-white px-1.5 py-0.5 text-sm focus:outline-2 focus:outline-ochre-400"
       value={text}
+      data-pending={text !== value}
       onChange={(e) => setText(e.target.value)}
       onBlur={commit}
       onKeyDown={(e) => {
