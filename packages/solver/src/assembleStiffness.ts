@@ -26,15 +26,22 @@ export function segmentSections(model: BeamModel): SegmentSection[] {
 export function assembleStiffness(model: BeamModel, dofs: DofMap, sections: readonly SegmentSection[]): AssembledSystem {
   const stiffness = createBandedMatrix(dofs.count, dofs.halfBandwidth);
   const elements = new Float64Array(16 * sections.length);
+  // Equal segments (the usual case) share one element matrix.
+  const cache = new Map<string, number[][]>();
   for (let e = 0; e < sections.length; e++) {
     const section = sections[e]!;
     const length = model.nodes[e + 1]!.x - model.nodes[e]!.x;
-    const shearStiffness = section.shearFlexibility > 0 ? 1 / section.shearFlexibility : undefined;
-    const k = elementStiffness(shearStiffness === undefined ? { length, EI: section.EI } : { length, EI: section.EI, shearStiffness });
+    const key = `${length}|${section.EI}|${section.shearFlexibility}`;
+    let k = cache.get(key);
+    if (!k) {
+      const shearStiffness = section.shearFlexibility > 0 ? 1 / section.shearFlexibility : undefined;
+      k = elementStiffness(shearStiffness === undefined ? { length, EI: section.EI } : { length, EI: section.EI, shearStiffness }).to2DArray();
+      cache.set(key, k);
+    }
     const map = elementDofs(dofs, e);
     for (let a = 0; a < 4; a++) {
       for (let b = 0; b < 4; b++) {
-        const v = k.get(a, b);
+        const v = k[a]![b]!;
         elements[16 * e + 4 * a + b] = v;
         if (b <= a && map[a]! >= 0 && map[b]! >= 0) addToBanded(stiffness, map[a]!, map[b]!, a === b || map[a] !== map[b] ? v : 2 * v);
       }

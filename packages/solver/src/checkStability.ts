@@ -30,8 +30,15 @@ export function findRigidMotion(model: BeamModel, dofs: DofMap): Float64Array | 
   }
   const parts = partStart.length;
   const normal = createBandedMatrix(2 * parts, 3);
-  const addRow = (entries: [number, number][]) => {
-    for (const [i, a] of entries) for (const [j, b] of entries) if (j <= i) addToBanded(normal, i, j, a * b);
+  // Adds the outer product of one constraint row (≤ 3 non-zeros at i0…) to AᵀA.
+  const row = new Float64Array(3);
+  const cols = new Int32Array(3);
+  const addRow = (count: number) => {
+    for (let a = 0; a < count; a++) for (let b = 0; b <= a; b++) addToBanded(normal, cols[a]!, cols[b]!, row[a]! * row[b]!);
+  };
+  const set = (slot: number, col: number, value: number) => {
+    cols[slot] = col;
+    row[slot] = value;
   };
   const lever = (p: number, x: number) => (x - nodes[partStart[p]!]!.x) / length;
   for (let i = 0; i < n; i++) {
@@ -39,18 +46,24 @@ export function findRigidMotion(model: BeamModel, dofs: DofMap): Float64Array | 
     const p = partOfNode[i]!;
     if (node.hinge && i > 0 && i < n - 1 && p > 0) {
       // Left part p−1 ends here; the right part p starts here (lever 0).
-      addRow([
-        [2 * (p - 1), 1],
-        [2 * (p - 1) + 1, lever(p - 1, node.x)],
-        [2 * p, -1],
-      ]);
+      set(0, 2 * (p - 1), 1);
+      set(1, 2 * (p - 1) + 1, lever(p - 1, node.x));
+      set(2, 2 * p, -1);
+      addRow(3);
     }
     const support = node.support;
     if (!support) continue;
     const holdsUy = support.type === "pinned" || support.type === "fixed" || (support.type === "spring" && (support.ky ?? 0) > 0);
     const holdsRz = support.type === "fixed" || support.type === "guided" || (support.type === "spring" && (support.kr ?? 0) > 0);
-    if (holdsUy) addRow([[2 * p, 1], [2 * p + 1, lever(p, node.x)]]);
-    if (holdsRz) addRow([[2 * p + 1, 1]]);
+    if (holdsUy) {
+      set(0, 2 * p, 1);
+      set(1, 2 * p + 1, lever(p, node.x));
+      addRow(2);
+    }
+    if (holdsRz) {
+      set(0, 2 * p + 1, 1);
+      addRow(1);
+    }
   }
   const factored = factorBanded(normal, KINEMATIC_TOLERANCE);
   if (factored.ok) return undefined;

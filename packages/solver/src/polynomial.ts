@@ -28,6 +28,7 @@ export function findSignChanges(coef: ArrayLike<number>, offset: number, degree:
     const root = -coef[offset]! / coef[offset + 1]!;
     return root > lo && root < hi ? [root] : [];
   }
+  if (d === 2) return quadraticSignChanges(coef[offset]!, coef[offset + 1]!, coef[offset + 2]!, lo, hi);
   const derivative = new Float64Array(d);
   differentiate(coef, offset, d, derivative);
   const critical = findSignChanges(derivative, 0, d - 1, lo, hi);
@@ -42,6 +43,17 @@ export function findSignChanges(coef: ArrayLike<number>, offset: number, degree:
     fa = fb;
   }
   return roots;
+}
+
+/** Roots of c + b·u + a·u² in (lo, hi), by the cancellation-free form of the quadratic formula. */
+function quadraticSignChanges(c: number, b: number, a: number, lo: number, hi: number): number[] {
+  const discriminant = b * b - 4 * a * c;
+  if (!(discriminant > 0)) return [];
+  const q = -0.5 * (b + Math.sign(b || 1) * Math.sqrt(discriminant));
+  const r1 = q / a;
+  const r2 = q !== 0 ? c / q : r1;
+  const roots = r1 < r2 ? [r1, r2] : [r2, r1];
+  return roots.filter((r) => r > lo && r < hi);
 }
 
 function refineRoot(coef: ArrayLike<number>, offset: number, degree: number, a: number, fa: number, b: number, fb: number): number {
