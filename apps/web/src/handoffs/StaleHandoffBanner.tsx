@@ -1,0 +1,54 @@
+import { useState } from "react";
+import { Link } from "react-router";
+import type { Handoff } from "@spanwright/contracts";
+import { Button, buttonClasses } from "../components/Button";
+import { HandoffDialog } from "./HandoffDialog";
+import { outdatedHandoffs, outdatedRecipients } from "./staleHandoffs";
+
+/**
+ * The alert that the foundation designer holds outdated reactions: a newer revision changes an
+ * issued value beyond the project's threshold. One line per beam, with compare and re-issue.
+ */
+export function StaleHandoffBanner({ handoffs, canIssue }: { handoffs: readonly Handoff[]; canIssue: boolean }) {
+  const [reissuing, setReissuing] = useState<Handoff | null>(null);
+  const outdated = outdatedHandoffs(handoffs);
+  if (outdated.length === 0) return null;
+  return (
+    <div role="status" className="space-y-2 rounded-md border-l-4 border-ochre-500 bg-caution-50 px-4 py-3 text-sm text-caution-700">
+      <p className="font-semibold">The foundation designer holds outdated reactions</p>
+      <ul className="space-y-2">
+        {outdated.map((h) => {
+          const to = outdatedRecipients(handoffs, h.beamId).map((r) => r.name ?? r.email).join(", ");
+          return (
+            <li key={h.id} className="flex flex-wrap items-center gap-x-3 gap-y-1">
+              <span>
+                {`${h.beamName}: r${h.latestVersion} changes ${h.staleValueCount} issued value${h.staleValueCount === 1 ? "" : "s"} of r${h.version}, held by ${to}.`}
+              </span>
+              <Link
+                to={`/projects/${h.projectId}/beams/${h.beamId}/compare?from=${h.version}&to=${h.latestVersion}`}
+                className={buttonClasses("secondary", "sm")}
+              >
+                {`Compare r${h.version} with r${h.latestVersion}`}
+              </Link>
+              {canIssue && (
+                <Button size="sm" variant="accent" onClick={() => setReissuing(h)}>
+                  {`Re-issue r${h.latestVersion}`}
+                </Button>
+              )}
+            </li>
+          );
+        })}
+      </ul>
+      {reissuing !== null && (
+        <HandoffDialog
+          projectId={reissuing.projectId}
+          beamId={reissuing.beamId}
+          beamName={reissuing.beamName}
+          version={reissuing.latestVersion}
+          initialRecipients={outdatedRecipients(handoffs, reissuing.beamId)}
+          onClose={() => setReissuing(null)}
+        />
+      )}
+    </div>
+  );
+}
