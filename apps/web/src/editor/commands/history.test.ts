@@ -85,6 +85,11 @@ describe("dirty tracking", () => {
     expect(isDirty(h)).toBe(false);
   });
 
+  it("switching display units alone leaves nothing to save", () => {
+    const h = apply(createHistory(twoSpanDocument()), (d) => setUnits(d, { units: "us" }));
+    expect(isDirty(h)).toBe(false);
+  });
+
   it("compares against the last save, not the first load", () => {
     let h = apply(createHistory(twoSpanDocument()), (d) => toggleHinge(d, { nodeId: ids.n1 }));
     h = markSaved(h);

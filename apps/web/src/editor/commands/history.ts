@@ -97,10 +97,13 @@ export function redo(h: EditorHistory): EditorHistory {
 }
 
 /** Compares field by field: identical references (after undo) are cheap; edits that were typed
- * back to the saved value compare equal structurally. */
+ * back to the saved value compare equal structurally. Display units are not part of the saved
+ * exchange model, so switching them alone leaves nothing to save. */
 export function isDirty(h: EditorHistory): boolean {
   if (h.doc === h.saved) return false;
-  return (Object.keys(h.doc) as (keyof BeamDocument)[]).some((k) => h.doc[k] !== h.saved[k] && !deepEqual(h.doc[k], h.saved[k]));
+  return (Object.keys(h.doc) as (keyof BeamDocument)[]).some(
+    (k) => k !== "units" && h.doc[k] !== h.saved[k] && !deepEqual(h.doc[k], h.saved[k]),
+  );
 }
 
 export function markSaved(h: EditorHistory, saved: BeamDocument = h.doc): EditorHistory {

@@ -23,15 +23,11 @@ export function DiagramsStage({ analysis, name, isEnvelope, camera, width, units
   const series = useMemo(() => quantities.map((q) => seriesFor(analysis, name, isEnvelope, q)), [analysis, name, isEnvelope]);
   const height = ROW_HEIGHT * quantities.length;
   return (
-    <Stage
-      width={width}
-      height={height}
-      onPointerMove={(e) => {
-        const pos = e.target.getStage()?.getPointerPosition();
-        if (pos) onHover(screenToWorldX(camera, pos.x));
-      }}
+    <div
+      onPointerMove={(e) => onHover(screenToWorldX(camera, e.clientX - e.currentTarget.getBoundingClientRect().left))}
       onPointerLeave={() => onHover(null)}
     >
+    <Stage width={width} height={height}>
       <Layer listening={false}>
         {quantities.map((q, i) => (
           <DiagramRow key={q} series={series[i] ?? null} quantity={q} top={i * ROW_HEIGHT} width={width} camera={camera} units={units} />
@@ -41,5 +37,6 @@ export function DiagramsStage({ analysis, name, isEnvelope, camera, width, units
         {hoverX !== null && <Line points={[worldToScreenX(camera, hoverX), 0, worldToScreenX(camera, hoverX), height]} stroke="#8198bd" strokeWidth={1} dash={[3, 3]} />}
       </Layer>
     </Stage>
+    </div>
   );
 }
