@@ -1,0 +1,148 @@
+import { useMemo, useState } from "react";
+import {
+  DEFLECTION_LIMIT_PRESETS,
+  governingRow,
+  propertiesOfValidShape,
+  validateSectionShape,
+  type DeflectionLimit,
+  type DesignMethod,
+  type Material,
+  type ResultLike,
+  type SectionShape,
+} from "@spanwright/solver/design";
+import { Alert } from "../components/Alert";
+import { SelectField } from "../components/SelectField";
+import { TextField } from "../components/TextField";
+import { formatNumber } from "../editor/units/formatQuantity";
+import type { UnitSystemId } from "../editor/units/unitSystems";
+import { CheckTable } from "./CheckTable";
+import { computeBeamChecks } from "./computeBeamChecks";
+import { DesignCaution } from "./DesignCaution";
+import { caseIds, combinationIds, type DesignModel } from "./designModel";
+import { designUnit, formatDesign, fromDesignDisplay } from "./designUnits";
+import { IdChecklist } from "./IdChecklist";
+
+export interface ChecksPanelProps {
+  /** Exchange-format model (`toExchange(doc)` or a saved revision's model). */
+  readonly model: DesignModel;
+  /** Its result, if any; solved again when it lacks the stations the checks need. */
+  readonly result?: ResultLike | null;
+  readonly units: UnitSystemId;
+  /** Section and material to check (from SectionEditor and MaterialPicker), SI. */
+  readonly shape: SectionShape;
+  readonly material: Material;
+}
+
+const TYPED = "typed";
+
+function defaultDeflectionIds(model: DesignModel): string[] {
+  const live = model.loadCases.filter((c) => c.category === "live").map((c) => c.id);
+  return live.length > 0 ? live : caseIds(model).slice(0, 1);
+}
+
+/** Optional positive number typed in display units; null when blank or not a positive number. */
+function parsePositive(text: string, units: UnitSystemId, quantity: "length" | "stress"): number | null {
+  const n = Number(text);
+  return text.trim() === "" || !(n > 0) ? null : fromDesignDisplay(n, units, quantity);
+}
+
+/** Member checks per span for the given section and material, with their inputs, formulas and clauses. */
+export function ChecksPanel({ model, result = null, units, shape, material }: ChecksPanelProps) {
+  const combos = combinationIds(model);
+  const cases = caseIds(model);
+  const [method, setMethod] = useState<DesignMethod>("LRFD");
+  const [lbText, setLbText] = useState("");
+  const [limitChoice, setLimitChoice] = useState<string>("floor-live");
+  const [ratioText, setRatioText] = useState("360");
+  const [strengthIds, setStrengthIds] = useState<string[]>(() => (combos.length > 0 ? combos : cases));
+  const [deflectionIds, setDeflectionIds] = useState<string[]>(() => defaultDeflectionIds(model));
+  const [allowBendingText, setAllowBendingText] = useState("");
+  const [allowShearText, setAllowShearText] = useState("");
+
+  const limit = useMemo((): DeflectionLimit | null => {
+    const preset = DEFLECTION_LIMIT_PRESETS.find((p) => p.id === limitChoice);
+    const ratio = Number(ratioText);
+    return preset ? { kind: "preset", preset } : ratio > 0 ? { kind: "ratio", ratio } : null;
+  }, [limitChoice, ratioText]);
+  const Lb = parsePositive(lbText, units, "length");
+  const validShape = useMemo(() => validateSectionShape(shape), [shape]);
+  const isIShape = shape.kind === "i-shape";
+
+  const outcome = useMemo(() => {
+    if (!validShape.ok) return { ok: false as const, message: `Section: ${validShape.error.message}` };
+    if (!limit) return { ok: false as const, message: "Type a deflection limit ratio greater than zero." };
+    return computeBeamChecks({
+      model, result, shape: validShape.value, material, method, Lb, strengthIds, deflectionIds, deflectionLimit: limit,
+      allowableBending: parsePositive(allowBendingText, units, "stress"),
+      allowableShear: parsePositive(allowShearText, units, "stress"),
+    });
+  }, [model, result, validShape, material, method, Lb, strengthIds, deflectionIds, limit, allowBendingText, allowShearText, units]);
+
+  const sectionI = validShape.ok ? propertiesOfValidShape(validShape.value).I : null;
+  const mismatched = sectionI !== null && model.segments.some((s) => Math.abs(s.I - sectionI) > 0.02 * sectionI);
+  const worst = outcome.ok ? governingRow(outcome.rows) : undefined;
+
+  return (
+    <div className="space-y-4">
+      <div className="grid gap-3 md:grid-cols-4">
+        <div className="text-sm">
+          <p className="font-medium text-ink-800">Material</p>
+          <p className="text-paper-700">{material.name}</p>
+          <p className="text-xs text-paper-600">
+            E = {formatDesign(material.E, units, "stress")}
+            {material.Fy !== undefined ? `, Fy = ${formatDesign(material.Fy, units, "stress")}` : ""}
+            {material.typical ? " (typical, confirm)" : ""}
+          </p>
+        </div>
+        {isIShape && (
+          <SelectField label="Design method" name="design-method" value={method} options={[{ value: "LRFD", label: "LRFD (φ)" }, { value: "ASD", label: "ASD (Ω)" }]} onChange={(e) => setMethod(e.target.value as DesignMethod)} />
+        )}
+        {isIShape && (
+          <TextField label={`Unbraced length Lb (${designUnit(units, "length")})`} name="Lb" inputMode="decimal" value={lbText} placeholder="braced at supports only" hint="Braces every Lb from the start of each span" onChange={(e) => setLbText(e.target.value)} />
+        )}
+        {!isIShape && (
+          <TextField label={`Allowable bending stress (${designUnit(units, "stress")})`} name="allowable-bending" inputMode="decimal" value={allowBendingText} onChange={(e) => setAllowBendingText(e.target.value)} />
+        )}
+        {!isIShape && (
+          <TextField label={`Allowable shear stress (${designUnit(units, "stress")})`} name="allowable-shear" inputMode="decimal" value={allowShearText} onChange={(e) => setAllowShearText(e.target.value)} />
+        )}
+        <SelectField
+          label="Deflection limit"
+          name="deflection-limit"
+          value={limitChoice}
+          options={[...DEFLECTION_LIMIT_PRESETS.map((p) => ({ value: p.id, label: p.label })), { value: TYPED, label: "Typed ratio L/n" }]}
+          onChange={(e) => setLimitChoice(e.target.value)}
+        />
+        {limitChoice === TYPED && <TextField label="n in L/n" name="deflection-ratio" inputMode="decimal" value={ratioText} onChange={(e) => setRatioText(e.target.value)} />}
+      </div>
+      <div className="grid gap-3 md:grid-cols-2">
+        <IdChecklist legend={isIShape ? `Strength checks (${method} combinations)` : "Stress checks for"} ids={[...combos, ...cases]} selected={strengthIds} onChange={setStrengthIds} />
+        <IdChecklist legend="Deflection checks for" ids={[...cases, ...combos]} selected={deflectionIds} onChange={setDeflectionIds} />
+      </div>
+      {combos.length === 0 && <Alert tone="caution" title="No combinations">Strength checks need factored combinations: generate them from a code preset first.</Alert>}
+      {mismatched && (
+        <Alert tone="caution" title="Section and analysis differ">
+          The beam was analysed with segment I values that differ from this section's I = {formatDesign(sectionI ?? 0, units, "secondMoment")}. Apply the section to the segments and solve again before relying on the checks.
+        </Alert>
+      )}
+      {outcome.ok ? (
+        <>
+          {worst && worst.check.status !== "not-covered" && (
+            <p className="text-sm">
+              Governing: <span className="font-medium">{worst.check.title}</span>, {worst.span}, {worst.caseId}, utilisation{" "}
+              <span className={`font-mono font-semibold ${worst.check.pass ? "text-success-600" : "text-danger-700"}`}>{formatNumber(worst.check.utilisation, 3)}</span>
+            </p>
+          )}
+          {outcome.notes.map((n) => (
+            <p key={n} className="text-xs text-paper-600">{n}</p>
+          ))}
+          {outcome.resolved && <p className="text-xs text-paper-600">Solved again with stations at the span ends, braces and quarter points for exact Cb and deflections.</p>}
+          {outcome.rows.length === 0 ? <p className="text-sm text-paper-600">Choose cases or combinations to check.</p> : <CheckTable rows={outcome.rows} units={units} />}
+        </>
+      ) : (
+        <Alert tone="error" title="Checks not available">{outcome.message}</Alert>
+      )}
+      <DesignCaution />
+    </div>
+  );
+}

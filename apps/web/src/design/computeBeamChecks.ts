@@ -1,0 +1,108 @@
+import { solve, SolverError } from "@spanwright/solver";
+import {
+  checkBendingStress,
+  checkDeflection,
+  checkShearStress,
+  checkStations,
+  propertiesOfValidShape,
+  spanDeflection,
+  stationsFromResult,
+  steelBeamChecks,
+  type DeflectionLimit,
+  type DesignMethod,
+  type Material,
+  type ResultLike,
+  type SectionShape,
+  type SpanCheckRow,
+} from "@spanwright/solver/design";
+import { bracePointsEvery, designSpans, resultCovers, type DesignModel, type DesignSpan } from "./designModel";
+
+export interface BeamCheckRequest {
+  readonly model: DesignModel;
+  /** The saved or live result; solved again (with check stations) when it lacks stations. */
+  readonly result: ResultLike | null;
+  readonly shape: SectionShape;
+  readonly material: Material;
+  readonly method: DesignMethod;
+  /** Maximum unbraced length of the compression flange, m; null = braced at the supports only. */
+  readonly Lb: number | null;
+  readonly strengthIds: readonly string[];
+  readonly deflectionIds: readonly string[];
+  readonly deflectionLimit: DeflectionLimit;
+  /** User allowables for the elastic checks of sections other than I-shapes, Pa. */
+  readonly allowableBending: number | null;
+  readonly allowableShear: number | null;
+}
+
+export type BeamCheckOutcome =
+  | { readonly ok: true; readonly rows: readonly SpanCheckRow[]; readonly resolved: boolean; readonly notes: readonly string[] }
+  | { readonly ok: false; readonly message: string };
+
+function peak(values: readonly number[]): number {
+  return values.reduce((m, v) => (Math.abs(v) > Math.abs(m) ? v : m), 0);
+}
+
+function elasticRows(req: BeamCheckRequest, spans: readonly DesignSpan[], result: ResultLike): SpanCheckRow[] {
+  const p = propertiesOfValidShape(req.shape);
+  const rows: SpanCheckRow[] = [];
+  for (const span of spans) {
+    for (const id of req.strengthIds) {
+      const inSpan = stationsFromResult(result, id).filter((s) => s.x >= span.x1 - 1e-9 && s.x <= span.x2 + 1e-9);
+      if (inSpan.length === 0) continue;
+      const at = { span: span.label, caseId: id, x1: span.x1, x2: span.x2 };
+      if (req.allowableBending !== null)
+        rows.push({ ...at, check: checkBendingStress({ M: peak(inSpan.map((s) => s.M)), I: p.I, yTop: p.yTop, depth: p.depth, allowable: req.allowableBending }) });
+      if (req.allowableShear !== null && p.Q !== null && p.bNA !== null)
+        rows.push({ ...at, check: checkShearStress({ V: peak(inSpan.map((s) => s.V)), Q: p.Q, I: p.I, b: p.bNA, allowable: req.allowableShear }) });
+    }
+    for (const id of req.deflectionIds) {
+      const supportAt = span.kind === "cantilever" ? (span.supportAt ?? "left") : "both";
+      const deflection = spanDeflection(stationsFromResult(result, id), span.x1, span.x2, supportAt);
+      const check = checkDeflection({ length: span.x2 - span.x1, spanKind: span.kind, deflection, limit: req.deflectionLimit, caseLabel: id });
+      rows.push({ span: span.label, caseId: id, x1: span.x1, x2: span.x2, check });
+    }
+  }
+  return rows;
+}
+
+/**
+ * The per-span check table for a beam: AISC 360-22 F2/G2 for I-shapes, elastic σ and τ against
+ * user allowables otherwise, and deflection limits. Solves the model again when the given result
+ * lacks the stations the checks need (span ends, braces, quarter points); `solve` is pure and fast.
+ */
+export function computeBeamChecks(req: BeamCheckRequest): BeamCheckOutcome {
+  const spans = designSpans(req.model);
+  if (spans.length === 0) return { ok: false, message: "The beam has no spans to check." };
+  const braces = bracePointsEvery(spans, req.Lb);
+  const xs = checkStations([...new Set(spans.flatMap((s) => [s.x1, s.x2]))], braces);
+  const ids = [...new Set([...req.strengthIds, ...req.deflectionIds])];
+  let result = req.result;
+  let resolved = false;
+  if (!resultCovers(result, ids, xs)) {
+    try {
+      result = solve({ ...req.model, stations: xs });
+      resolved = true;
+    } catch (error) {
+      if (error instanceof SolverError) return { ok: false, message: `The beam could not be solved for the checks: ${error.message}` };
+      throw error;
+    }
+  }
+  if (!result) return { ok: false, message: "No result to check." };
+  const notes: string[] = [];
+  if (req.shape.kind === "i-shape") {
+    if (req.material.Fy === undefined) return { ok: false, message: "The AISC checks need the yield stress Fy of the material." };
+    const rows = steelBeamChecks({
+      shape: req.shape,
+      Fy: req.material.Fy,
+      E: req.material.E,
+      method: req.method,
+      spans,
+      bracePoints: braces,
+      strength: req.strengthIds.map((id) => ({ id, stations: stationsFromResult(result, id) })),
+      deflection: req.deflectionIds.map((id) => ({ id, stations: stationsFromResult(result, id), limit: req.deflectionLimit })),
+    });
+    return { ok: true, rows, resolved, notes };
+  }
+  notes.push("AISC 360-22 Chapters F and G apply to I-shapes here; this section is checked elastically against your allowables.");
+  return { ok: true, rows: elasticRows(req, spans, result), resolved, notes };
+}
