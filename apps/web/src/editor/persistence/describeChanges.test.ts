@@ -10,6 +10,11 @@ describe("describeChanges", () => {
     expect(describeChanges(base, structuredClone(base), "si")).toEqual([]);
   });
 
+  it("ignores the order of object keys, which the server may change", () => {
+    const reordered = JSON.parse(JSON.stringify(base, (_k, v: unknown) => (v && typeof v === "object" && !Array.isArray(v) ? Object.fromEntries(Object.entries(v).reverse()) : v)));
+    expect(describeChanges(base, reordered, "si")).toEqual([]);
+  });
+
   it.each<[string, (m: typeof base) => void, string]>([
     ["a moved node", (m) => void (m.nodes[1]!.x = 6.5), "Node 2 moved 6 m → 6.5 m"],
     ["a new hinge", (m) => void (m.nodes[1]!.hinge = true), "Node 2 hinge added"],

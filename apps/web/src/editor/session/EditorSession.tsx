@@ -7,6 +7,7 @@ import { describeError } from "../../api/client";
 import { isDirty as historyIsDirty } from "../commands/history";
 import { replaceDocument } from "../commands/documentCommands";
 import { toExchange } from "../model/exchange";
+import { deepEqual } from "../model/patch";
 import { createTemplate } from "../model/templates";
 import { clearDraft, draftKey, readDraft, type Draft } from "../persistence/draftStorage";
 import { importModel } from "../persistence/importModel";
@@ -43,7 +44,7 @@ export function EditorSession({ projectId, initial, units, canEdit }: EditorSess
   const [baseVersion, setBaseVersion] = useState(initial.revision.version);
   const [draft, setDraft] = useState<Draft | null>(() => {
     const d = readDraft(key);
-    return d && JSON.stringify(d.model) !== JSON.stringify(toExchange(store.doc)) ? d : null;
+    return d && !deepEqual(d.model, toExchange(store.doc)) ? d : null;
   });
   const [conflict, setConflict] = useState<Revision | null>(null);
   const [saveError, setSaveError] = useState<string | null>(null);
