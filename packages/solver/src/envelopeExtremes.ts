@@ -94,12 +94,14 @@ function visitFactorSet(context: EnvelopeExtremesContext, factors: FactorSet, qu
   const lower = new Float64Array(n);
   const derivative = new Float64Array(degree);
   const cursor = new Int32Array(patterned.length);
-  const visit = (poly: Float64Array, a: number, b: number, x0: number, isUpper: boolean) => {
+  const visit = (poly: Float64Array, a: number, b: number, x0: number, h: number, x1: number, isUpper: boolean) => {
+    // The interval's right end is reported at the breakpoint itself, not x0 + h (rounding).
     const consider = (u: number) => {
       const v = evaluatePolynomial(poly, 0, degree, u);
       if (isUpper ? v > tracker.max.value : v < tracker.min.value) {
-        if (isUpper) tracker.max = { value: v, x: x0 + u };
-        else tracker.min = { value: v, x: x0 + u };
+        const x = u === h ? x1 : x0 + u;
+        if (isUpper) tracker.max = { value: v, x };
+        else tracker.min = { value: v, x };
       }
     };
     consider(a);
@@ -135,8 +137,9 @@ function visitFactorSet(context: EnvelopeExtremesContext, factors: FactorSet, qu
           lower[i]! += factor * toLower[s + i]!;
         }
       });
-      visit(upper, a, b, grid[k]!, true);
-      visit(lower, a, b, grid[k]!, false);
+      const h = grid[k + 1]! - grid[k]!;
+      visit(upper, a, b, grid[k]!, h, grid[k + 1]!, true);
+      visit(lower, a, b, grid[k]!, h, grid[k + 1]!, false);
     }
   }
 }

@@ -111,18 +111,35 @@ export function diagram(analysis: Analysis, id: string, quantity: Quantity, samp
 
 /** Tracks the running maximum and minimum with the first x where each occurs. */
 export class ExtremeTracker {
-  max: Extreme = { value: -Infinity, x: 0 };
-  min: Extreme = { value: Infinity, x: 0 };
+  maxValue = -Infinity;
+  maxX = 0;
+  minValue = Infinity;
+  minX = 0;
 
   visit(value: number, x: number): void {
-    if (value > this.max.value) this.max = { value, x };
-    if (value < this.min.value) this.min = { value, x };
+    if (value > this.maxValue) {
+      this.maxValue = value;
+      this.maxX = x;
+    }
+    if (value < this.minValue) {
+      this.minValue = value;
+      this.minX = x;
+    }
+  }
+
+  get max(): Extreme {
+    return { value: this.maxValue, x: this.maxX };
+  }
+
+  get min(): Extreme {
+    return { value: this.minValue, x: this.minX };
   }
 }
 
 /**
  * Visits the values of a polynomial on [0, h] at both ends and at every interior extreme (sign
- * change of its derivative); `scratch` needs length ≥ degree.
+ * change of its derivative); `scratch` needs length ≥ degree. The right end is reported at x1
+ * (the breakpoint itself, free of rounding in x0 + h).
  */
 export function visitPolynomialExtremes(
   coef: ArrayLike<number>,
@@ -130,35 +147,33 @@ export function visitPolynomialExtremes(
   degree: number,
   h: number,
   x0: number,
+  x1: number,
   scratch: Float64Array,
-  visit: (value: number, x: number) => void,
+  tracker: ExtremeTracker,
 ): void {
-  visit(evaluatePolynomial(coef, offset, degree, 0), x0);
+  tracker.visit(evaluatePolynomial(coef, offset, degree, 0), x0);
   for (let k = 1; k <= degree; k++) scratch[k - 1] = k * coef[offset + k]!;
-  for (const u of findSignChanges(scratch, 0, degree - 1, 0, h)) visit(evaluatePolynomial(coef, offset, degree, u), x0 + u);
-  visit(evaluatePolynomial(coef, offset, degree, h), x0 + h);
+  for (const u of findSignChanges(scratch, 0, degree - 1, 0, h)) tracker.visit(evaluatePolynomial(coef, offset, degree, u), x0 + u);
+  tracker.visit(evaluatePolynomial(coef, offset, degree, h), x1);
 }
 
 /** The exact maximum and minimum of V, M and uy over the beam for one curve. */
 export function curveExtremes(grid: ArrayLike<number>, curve: Curve): Extremes {
-  const trackers = { V: new ExtremeTracker(), M: new ExtremeTracker(), uy: new ExtremeTracker() };
+  const V = new ExtremeTracker();
+  const M = new ExtremeTracker();
+  const uy = new ExtremeTracker();
   const scratch = new Float64Array(6);
+  const coef = curve.coef;
   for (let k = 0; k + 1 < grid.length; k++) {
-    const h = grid[k + 1]! - grid[k]!;
-    for (const q of ["V", "M", "uy"] as const) {
-      const { offset, degree } = QUANTITY_LAYOUT[q];
-      const tracker = trackers[q];
-      visitPolynomialExtremes(curve.coef, k * COEFFICIENTS_PER_INTERVAL + offset, degree, h, grid[k]!, scratch, (v, x) => tracker.visit(v, x));
-    }
+    const x0 = grid[k]!;
+    const x1 = grid[k + 1]!;
+    const h = x1 - x0;
+    const o = k * COEFFICIENTS_PER_INTERVAL;
+    visitPolynomialExtremes(coef, o + V_OFFSET, 2, h, x0, x1, scratch, V);
+    visitPolynomialExtremes(coef, o + M_OFFSET, 3, h, x0, x1, scratch, M);
+    visitPolynomialExtremes(coef, o + UY_OFFSET, 5, h, x0, x1, scratch, uy);
   }
-  return {
-    Mmax: trackers.M.max,
-    Mmin: trackers.M.min,
-    Vmax: trackers.V.max,
-    Vmin: trackers.V.min,
-    uyMax: trackers.uy.max,
-    uyMin: trackers.uy.min,
-  };
+  return { Mmax: M.max, Mmin: M.min, Vmax: V.max, Vmin: V.min, uyMax: uy.max, uyMin: uy.min };
 }
 
 /** Exact extremes of V, M and uy for a load case or combination id (undefined for an unknown id). */
