@@ -1,9 +1,11 @@
+import { useState } from "react";
 import { Link, useParams } from "react-router";
 import { can } from "@spanwright/contracts";
 import { useBeam } from "../api/beams";
 import { useProject } from "../api/projects";
 import { Loading, QueryError } from "../components/QueryState";
 import { EditorSession } from "./session/EditorSession";
+import { getSolverWorker } from "./results/solverWorker";
 
 /**
  * Route /projects/:projectId/beams/:beamId: loads the beam's latest revision and opens it. The
@@ -11,6 +13,7 @@ import { EditorSession } from "./session/EditorSession";
  */
 export function BeamEditorPage() {
   const { projectId = "", beamId = "" } = useParams();
+  useState(getSolverWorker); // start the engine worker while the beam loads
   const beam = useBeam(projectId, beamId);
   const project = useProject(projectId);
   if (beam.isPending || project.isPending) return <Loading label="Opening beam…" />;

@@ -3,6 +3,7 @@ import type { Analysis } from "@spanwright/solver";
 import type { BeamDocument } from "../model/BeamDocument";
 import { toExchange } from "../model/exchange";
 import type { SolveFailure, SolveRequest, SolveResponse } from "./solveMessages";
+import { getSolverWorker, nextSolveSeq } from "./solverWorker";
 
 export type AnalysisState =
   | { readonly status: "solving"; readonly analysis: null; readonly error: null }
@@ -30,27 +31,24 @@ export function useAnalysis(doc: BeamDocument): AnalysisState {
   // Re-solve only when a solver-relevant field changed (arrays are replaced on every edit).
   const model = useMemo(() => toExchange(doc), [input.nodes, input.segments, input.loadCases, input.combinations, input.theory, input.stations]); // eslint-disable-line react-hooks/exhaustive-deps
   const [state, setState] = useState<AnalysisState>(solving);
-  const worker = useRef<Worker | null>(null);
   const seq = useRef(0);
 
   useEffect(() => {
-    if (typeof Worker === "undefined") return;
-    const w = new Worker(new URL("./solver.worker.ts", import.meta.url), { type: "module" });
-    worker.current = w;
-    w.onmessage = (event: MessageEvent<SolveResponse>) => {
+    const w = getSolverWorker();
+    if (!w) return;
+    const onMessage = (event: MessageEvent<SolveResponse>) => {
       if (event.data.seq === seq.current) setState(toState(event.data));
     };
-    return () => {
-      w.terminate();
-      worker.current = null;
-    };
+    w.addEventListener("message", onMessage);
+    return () => w.removeEventListener("message", onMessage);
   }, []);
 
   useEffect(() => {
-    seq.current += 1;
-    const request: SolveRequest = { seq: seq.current, model };
-    if (worker.current) {
-      worker.current.postMessage(request);
+    const w = getSolverWorker();
+    seq.current = nextSolveSeq();
+    if (w) {
+      const request: SolveRequest = { seq: seq.current, model };
+      w.postMessage(request);
       return;
     }
     setState({ status: "failed", analysis: null, error: { code: "internal", message: "This browser cannot run the engine in the background (no Web Worker support).", where: "" } });
