@@ -1,0 +1,82 @@
+import { describe, expect, it } from "vitest";
+import { fireEvent, render, screen, within } from "@testing-library/react";
+import { MATERIAL_PRESETS, propertiesOfValidShape, type IShape } from "@spanwright/solver/design";
+import { ChecksPanel } from "./ChecksPanel";
+import type { DesignModel } from "./designModel";
+
+// Plates of a W410×46-like rolled shape (approximate, from memory); the test's numbers are hand
+// calculations on the plates, not table values.
+const shape: IShape = { kind: "i-shape", d: 0.403, bf: 0.14, tf: 0.0112, tw: 0.007 };
+const I = propertiesOfValidShape(shape).I;
+const E = 200e9;
+const steel = MATERIAL_PRESETS.find((m) => m.id === "steel-a992")!;
+
+const loadCases = [
+  { id: "D", category: "dead" as const, loads: [{ type: "distributed", x1: 0, x2: 6, qy1: -10e3, qy2: -10e3 }] },
+  { id: "L", category: "live" as const, loads: [{ type: "distributed", x1: 0, x2: 6, qy1: -15e3, qy2: -15e3 }] },
+];
+
+/** Invented demo beam: one 6 m simple span, uniform dead 10 kN/m and live 15 kN/m. */
+const model: DesignModel & { format: string } = {
+  format: "spanwright.beam/1",
+  nodes: [
+    { x: 0, support: { type: "pinned" } },
+    { x: 6, support: { type: "pinned" } },
+  ],
+  segments: [{ E, I }],
+  loadCases,
+  combinations: [{ id: "LRFD2", factors: { D: 1.2, L: 1.6 } }],
+};
+
+function rowOf(title: RegExp): HTMLElement {
+  const table = screen.getByRole("table", { name: "Member checks" });
+  const row = within(table).getByText(title).closest("tr");
+  if (!row) throw new Error(`no row ${String(title)}`);
+  return row as HTMLElement;
+}
+
+function cells(row: HTMLElement): string[] {
+  return [...row.querySelectorAll("td")].map((td) => td.textContent ?? "");
+}
+
+describe("ChecksPanel", () => {
+  it("lists flexure, shear and deflection per span with demand, capacity and utilisation", () => {
+    render(<ChecksPanel model={model} units="si" shape={shape} material={steel} />);
+    const table = screen.getByRole("table", { name: "Member checks" });
+    const rows = within(table).getAllByRole("row").slice(1);
+    expect(rows).toHaveLength(3);
+
+    // Simple span under uniform load (statics): Mu = wu·L²/8 with wu = 1.2·10 + 1.6·15 = 36 kN/m → 162 kN·m.
+    const flexure = cells(rowOf(/flexure/i));
+    expect(flexure).toContain("162 kN·m");
+    expect(flexure.join(" ")).toMatch(/AISC 360-22 §F2/);
+    // Vu = wu·L/2 = 108 kN.
+    const shear = cells(rowOf(/shear/i));
+    expect(shear).toContain("108 kN");
+
+    // Live-load deflection 5wL⁴/(384EI) (simple span, uniform load) against L/360 = 16.67 mm.
+    const deflection = rowOf(/Deflection/);
+    const delta = (5 * 15e3 * 6 ** 4) / (384 * E * I);
+    const u = Number(deflection.querySelector("[data-utilisation]")?.getAttribute("data-utilisation"));
+    expect(u).toBeCloseTo(delta / (6 / 360), 3);
+    expect(cells(deflection)).toContain(`${Number((delta * 1000).toPrecision(4))} mm`);
+    expect(cells(deflection)).toContain("16.67 mm");
+
+    for (const row of rows) {
+      const status = row.getAttribute("data-status");
+      const ratio = Number(row.querySelector("[data-utilisation]")?.getAttribute("data-utilisation"));
+      expect(status).toBe(ratio <= 1 ? "pass" : "fail");
+    }
+    expect(screen.getByText(/do not replace, the judgement of a licensed engineer/)).toBeTruthy();
+    expect(screen.getByText("AISC 360-22")).toBeTruthy();
+  });
+
+  it("splits the span into unbraced segments when Lb is typed", () => {
+    render(<ChecksPanel model={model} units="si" shape={shape} material={steel} />);
+    fireEvent.change(screen.getByLabelText("Unbraced length Lb (m)"), { target: { value: "2" } });
+    const table = screen.getByRole("table", { name: "Member checks" });
+    // Three 2 m segments of flexure, one shear and one deflection row.
+    expect(within(table).getAllByText(/flexure/i)).toHaveLength(3);
+    expect(within(table).getAllByRole("row")).toHaveLength(1 + 5);
+  });
+});
