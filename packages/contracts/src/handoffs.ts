@@ -24,6 +24,11 @@ export const handoffRecipientSchema = z.object({
   /** Set when the recipient is a project member. */
   userId: z.string().nullable(),
   name: z.string().nullable(),
+  /**
+   * This recipient holds outdated reactions: the hand-off is stale and the recipient has had no
+   * later hand-off of the same beam. Always sent by the API.
+   */
+  outdated: z.boolean().optional(),
 });
 export type HandoffRecipient = z.infer<typeof handoffRecipientSchema>;
 

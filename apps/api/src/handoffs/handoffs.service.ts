@@ -60,10 +60,13 @@ export function createHandoffsService(deps: { db: Db; clock: Clock; beams: Beams
     };
   }
 
+  /** `records` newest first, as the repository returns them. */
   async function withStale(records: repo.HandoffRecord[], thresholdPct: number): Promise<Handoff[]> {
     const tableOf = tableCache();
     const out: Handoff[] = [];
-    for (const { beamLatestVersion, revisionId: _r, issuedAt, ...h } of records) {
+    // addresses that already appeared in a newer hand-off of the same beam
+    const reissued = new Set<string>();
+    for (const { beamLatestVersion, revisionId: _r, issuedAt, recipients, ...h } of records) {
       let changed = 0;
       let stale = false;
       if (beamLatestVersion > h.version) {
@@ -75,7 +78,9 @@ export function createHandoffsService(deps: { db: Db; clock: Clock; beams: Beams
           changed = verdict.changed.length;
         }
       }
-      out.push({ ...h, issuedAt: issuedAt.toISOString(), latestVersion: beamLatestVersion, stale, staleValueCount: changed });
+      const withStatus = recipients.map((r) => ({ ...r, outdated: stale && !reissued.has(`${h.beamId} ${r.email}`) }));
+      for (const r of recipients) reissued.add(`${h.beamId} ${r.email}`);
+      out.push({ ...h, recipients: withStatus, issuedAt: issuedAt.toISOString(), latestVersion: beamLatestVersion, stale, staleValueCount: changed });
     }
     return out;
   }

@@ -36,8 +36,8 @@ describe("hand-off", () => {
     });
     expect(handoff.recipients).toEqual(
       expect.arrayContaining([
-        { email: team.viewer.email, userId: team.viewer.userId, name: "Oluwaseun Viewer" },
-        { email: external, userId: null, name: null },
+        { email: team.viewer.email, userId: team.viewer.userId, name: "Oluwaseun Viewer", outdated: false },
+        { email: external, userId: null, name: null, outdated: false },
       ]),
     );
     const mail = await caughtFor(handoff.messageId);
@@ -138,5 +138,19 @@ describe("stale hand-off alert", () => {
     await team.engineer.client.post(`${team.revisions}/3/handoffs`, { recipients: [{ email: external }] });
     list = (await team.owner.client.get(`${team.projectPath}/handoffs`)).body.handoffs;
     expect(list.map((h: { version: number; stale: boolean }) => [h.version, h.stale])).toEqual([[3, false], [1, true]]);
+    // the old hand-off is stale, but its recipient has the re-issued numbers
+    expect(list[1].recipients[0].outdated).toBe(false);
+  });
+
+  it("names the recipients who still hold outdated reactions", async () => {
+    const team = await teamProject(t);
+    await team.engineer.client.post(`${team.revisions}/1/handoffs`, { recipients: [{ email: external }, { userId: team.viewer.userId }] });
+    await team.engineer.client.post(team.revisions, { baseVersion: 1, model: liveModel(-10_000, -8_000) });
+    await team.engineer.client.post(`${team.revisions}/2/handoffs`, { recipients: [{ email: external }] });
+    await team.engineer.client.post(team.revisions, { baseVersion: 2, model: liveModel(-10_000, -8_100) });
+    const list = (await team.viewer.client.get(`${team.projectPath}/handoffs`)).body.handoffs;
+    const outdated = list.flatMap((h: { recipients: Array<{ email: string; outdated: boolean }> }) => h.recipients.filter((r) => r.outdated).map((r) => r.email));
+    // revision 3 moves L by about 1 %, so revision 2's numbers are still current; revision 1's are not
+    expect(outdated).toEqual([team.viewer.email]);
   });
 });
