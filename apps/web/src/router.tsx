@@ -38,6 +38,10 @@ export const routes: RouteObject[] = [
             lazy: async () => ({ Component: (await import("./pages/members/MembersPage")).MembersPage }),
           },
           {
+            path: "projects/:projectId/beams/:beamId/design",
+            lazy: async () => ({ Component: (await import("./design/DesignPage")).DesignPage }),
+          },
+          {
             path: "projects/:projectId/beams/:beamId",
             lazy: async () => ({ Component: (await import("./editor/BeamEditorPage")).BeamEditorPage }),
           },
