@@ -38,6 +38,26 @@ export const routes: RouteObject[] = [
             lazy: async () => ({ Component: (await import("./pages/members/MembersPage")).MembersPage }),
           },
           {
+            path: "projects/:projectId/beams/:beamId/revisions",
+            lazy: async () => ({
+              Component: (await import("./pages/revisions/BeamRevisionsPage")).BeamRevisionsPage,
+            }),
+          },
+          {
+            path: "projects/:projectId/beams/:beamId/revisions/:version",
+            lazy: async () => ({ Component: (await import("./pages/revisions/RevisionPage")).RevisionPage }),
+          },
+          {
+            path: "projects/:projectId/beams/:beamId/compare",
+            lazy: async () => ({
+              Component: (await import("./pages/revisions/CompareRevisionsPage")).CompareRevisionsPage,
+            }),
+          },
+          {
+            path: "outbox",
+            lazy: async () => ({ Component: (await import("./pages/outbox/OutboxPage")).OutboxPage }),
+          },
+          {
             path: "projects/:projectId/beams/:beamId/design",
             lazy: async () => ({ Component: (await import("./design/DesignPage")).DesignPage }),
           },

@@ -1,8 +1,13 @@
 import { Link, NavLink, Outlet, useNavigation } from "react-router";
 import type { User } from "@spanwright/contracts";
+import { OutboxLink } from "../outbox/OutboxLink";
 import { Caution } from "./Caution";
 import { Wordmark } from "./Logo";
 import { UserMenu } from "./UserMenu";
+
+function navLinkClasses({ isActive }: { isActive: boolean }): string {
+  return `rounded-md px-3 py-1.5 text-sm ${isActive ? "bg-ink-700 text-paper-50" : "text-paper-300 hover:text-paper-50"}`;
+}
 
 /** Header, page body and footer for everything behind sign-in. */
 export function AppShell({ user }: { user: User }) {
@@ -24,12 +29,11 @@ export function AppShell({ user }: { user: User }) {
             <NavLink
               to="/projects"
               end
-              className={({ isActive }) =>
-                `rounded-md px-3 py-1.5 text-sm ${isActive ? "bg-ink-700 text-paper-50" : "text-paper-300 hover:text-paper-50"}`
-              }
+              className={navLinkClasses}
             >
               Projects
             </NavLink>
+            <OutboxLink className={navLinkClasses} />
           </nav>
           <UserMenu user={user} />
         </div>

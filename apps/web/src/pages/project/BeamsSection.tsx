@@ -8,6 +8,7 @@ import { Card } from "../../components/PageHeader";
 import { Loading, QueryError } from "../../components/QueryState";
 import { formatDate } from "../../formatDate";
 import { CreateBeamForm } from "./CreateBeamForm";
+import { ImportBeamForm } from "./ImportBeamForm";
 
 export function BeamsSection({ project }: { project: Project }) {
   const beams = useBeams(project.id);
@@ -54,7 +55,15 @@ export function BeamsSection({ project }: { project: Project }) {
                     {beam.name}
                   </Link>
                 </td>
-                <td className="tabular py-2.5 pr-3 text-paper-700">r{beam.latestVersion}</td>
+                <td className="tabular py-2.5 pr-3 text-paper-700">
+                  <Link
+                    to={`/projects/${project.id}/beams/${beam.id}/revisions`}
+                    className="underline-offset-2 hover:underline"
+                    aria-label={`Revisions of ${beam.name}, latest r${beam.latestVersion}`}
+                  >
+                    r{beam.latestVersion}
+                  </Link>
+                </td>
                 <td className="tabular py-2.5 pr-3 text-paper-700">{formatDate(beam.updatedAt, true)}</td>
                 {canEdit && (
                   <td className="py-2.5 text-right">
@@ -78,6 +87,15 @@ export function BeamsSection({ project }: { project: Project }) {
             projectId={project.id}
             onCreated={(beamId) => void navigate(`/projects/${project.id}/beams/${beamId}`)}
           />
+          <details className="mt-4">
+            <summary className="cursor-pointer text-sm font-medium text-ink-800">Import a beam from a JSON file</summary>
+            <div className="mt-3">
+              <ImportBeamForm
+                projectId={project.id}
+                onImported={(beamId) => void navigate(`/projects/${project.id}/beams/${beamId}`)}
+              />
+            </div>
+          </details>
         </div>
       ) : (
         <p className="mt-4 text-xs text-paper-600">Your role can open beams but not add or delete them.</p>

@@ -7,6 +7,7 @@ import { roleLabels, unitSystemLabels } from "../../roleLabels";
 import { NotFoundPage } from "../NotFoundPage";
 import { BeamsSection } from "./BeamsSection";
 import { MembersSummary } from "./MembersSummary";
+import { ProjectHandoffsSection } from "./ProjectHandoffsSection";
 import { ProjectSettings } from "./ProjectSettings";
 import { useProjectId } from "./useProjectId";
 
@@ -44,7 +45,10 @@ export function ProjectPage() {
         </div>
       </PageHeader>
       <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,2fr)_minmax(0,1fr)]">
-        <BeamsSection project={p} />
+        <div className="min-w-0 space-y-6">
+          <BeamsSection project={p} />
+          <ProjectHandoffsSection project={p} />
+        </div>
         <div className="space-y-6">
           <MembersSummary project={p} />
           <ProjectSettings project={p} />
