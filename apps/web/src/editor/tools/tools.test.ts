@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { ids, twoSpanDocument } from "../commands/testDocument";
 import { TestEditor } from "./TestEditor";
+import { editLoad } from "../commands/loadCommands";
 
 const xs = (e: TestEditor) => e.store.doc.nodes.map((n) => n.x);
 
@@ -20,6 +21,22 @@ describe("select tool", () => {
     expect(editor.store.getState().history.undoStack).toHaveLength(1);
     editor.store.undo();
     expect(xs(editor)).toEqual([0, 6, 12]);
+  });
+
+  it("drags the end of a distributed load to stretch it", () => {
+    const editor = new TestEditor(twoSpanDocument());
+    // The block of the test document's line load sits just above the beam; press on its right end.
+    const y = 150;
+    editor.pointerDown(12, y).pointerMove(11.5, y).pointerMove(10.02, y).pointerUp(10.02, y);
+    expect(editor.store.doc.loadCases[0]!.loads[0]).toMatchObject({ x1: 0, x2: 10 });
+    expect(editor.store.getState().history.undoStack).toHaveLength(1);
+  });
+
+  it("drags a distributed load by its middle keeping its length", () => {
+    const editor = new TestEditor(twoSpanDocument());
+    editor.store.run((d) => editLoad(d, { loadId: ids.udl, load: { id: ids.udl, type: "distributed", x1: 2, x2: 4, qy1: -3000, qy2: -3000 } }));
+    editor.pointerDown(3, 150).pointerMove(4, 150).pointerMove(6, 150).pointerUp(6, 150);
+    expect(editor.store.doc.loadCases[0]!.loads[0]).toMatchObject({ x1: 5, x2: 7 });
   });
 
   it("Escape during a drag puts the node back", () => {
