@@ -34,7 +34,7 @@ function median(samples: number[]): number {
 }
 
 /** Median wall time in ms over `runs` runs after `warmup` unmeasured ones. */
-function time(run: () => unknown, runs: number, warmup = Math.max(3, Math.floor(runs / 5))): number {
+function time(run: () => unknown, runs: number, warmup = Math.max(10, Math.floor(runs / 4))): number {
   for (let i = 0; i < warmup; i++) run();
   const samples: number[] = [];
   for (let i = 0; i < runs; i++) {
@@ -52,7 +52,7 @@ function singleCase(): Record<number, number> {
   const times: Record<number, number> = {};
   for (const spans of [20, 200, 2000]) {
     const model = generateBeam(spans, [{ id: "D", category: "dead", loads: uniform(spans, -10e3) }]);
-    times[spans] = time(() => solve(model), spans >= 2000 ? 15 : 50);
+    times[spans] = time(() => solve(model), spans >= 2000 ? 40 : 100);
     console.log(`one case, ${String(spans).padStart(4)} spans: solve ${ms(times[spans]!)} (median)`);
   }
   return times;

@@ -1,6 +1,5 @@
 import type { Analysis } from "./analysisTypes.js";
 import { locateInterval, QUANTITY_LAYOUT, type Side } from "./fieldQueries.js";
-import { evaluatePolynomial } from "./polynomial.js";
 import { COEFFICIENTS_PER_INTERVAL } from "./segmentField.js";
 
 /** The quantities the contract envelopes. */
@@ -44,57 +43,83 @@ export function envelopeFactorSets(analysis: Analysis, id: string): FactorSet[] 
  * parts sum its span pieces by sign, so the worst arrangement for any factor f is f·positive
  * (or f·negative) without enumerating the 2ⁿ arrangements; for other cases both parts are the value.
  */
+/** Horner's rule inlined here: this loop runs for every piece at every sample of an envelope. */
+function horner(coef: Float64Array, o: number, degree: number, u: number): number {
+  let v = coef[o + degree]!;
+  for (let i = degree - 1; i >= 0; i--) v = v * u + coef[o + i]!;
+  return v;
+}
+
 export function evaluateCaseParts(analysis: Analysis, k: number, u: number, quantity: EnvelopeQuantity, out: Float64Array): void {
   const { offset, degree } = QUANTITY_LAYOUT[quantity];
   const o = k * COEFFICIENTS_PER_INTERVAL + offset;
-  analysis.cases.forEach((loadCase, c) => {
+  const cases = analysis.cases;
+  for (let c = 0; c < cases.length; c++) {
+    const loadCase = cases[c]!;
     if (!loadCase.pattern) {
-      const v = evaluatePolynomial(loadCase.curve.coef, o, degree, u);
+      const v = horner(loadCase.curve.coef, o, degree, u);
       out[3 * c] = v;
       out[3 * c + 1] = v;
       out[3 * c + 2] = v;
-      return;
+      continue;
     }
     let positive = 0;
     let negative = 0;
-    for (const piece of loadCase.pieces) {
-      const v = evaluatePolynomial(piece.curve.coef, o, degree, u);
+    const pieces = loadCase.pieces;
+    for (let p = 0; p < pieces.length; p++) {
+      const v = horner(pieces[p]!.curve.coef, o, degree, u);
       if (v > 0) positive += v;
       else negative += v;
     }
     out[3 * c] = positive + negative;
     out[3 * c + 1] = positive;
     out[3 * c + 2] = negative;
-  });
+  }
 }
 
 /** [max, min] of a factored sum from case parts (patterned cases: adverse pieces only). */
 export function combineParts(analysis: Analysis, factors: FactorSet, parts: Float64Array): [number, number] {
   let max = 0;
   let min = 0;
-  for (const { caseIndex, factor } of factors) {
+  for (let i = 0; i < factors.length; i++) {
+    const { caseIndex, factor } = factors[i]!;
     const positive = factor * parts[3 * caseIndex + 1]!;
     const negative = factor * parts[3 * caseIndex + 2]!;
-    if (analysis.cases[caseIndex]!.pattern) {
-      max += Math.max(positive, negative);
-      min += Math.min(positive, negative);
-    } else {
+    if (positive >= negative) {
       max += positive;
+      min += negative;
+    } else {
+      max += negative;
       min += positive;
     }
   }
   return [max, min];
 }
 
-function envelopeOfSets(analysis: Analysis, sets: FactorSet[], parts: Float64Array): [number, number] {
+function envelopeOfSets(analysis: Analysis, sets: FactorSet[], parts: Float64Array, out: Float64Array, at: number): void {
   let max = -Infinity;
   let min = Infinity;
-  for (const factors of sets) {
-    const [hi, lo] = combineParts(analysis, factors, parts);
+  for (let s = 0; s < sets.length; s++) {
+    const factors = sets[s]!;
+    let hi = 0;
+    let lo = 0;
+    for (let i = 0; i < factors.length; i++) {
+      const { caseIndex, factor } = factors[i]!;
+      const positive = factor * parts[3 * caseIndex + 1]!;
+      const negative = factor * parts[3 * caseIndex + 2]!;
+      if (positive >= negative) {
+        hi += positive;
+        lo += negative;
+      } else {
+        hi += negative;
+        lo += positive;
+      }
+    }
     if (hi > max) max = hi;
     if (lo < min) min = lo;
   }
-  return [max, min];
+  out[at] = max;
+  out[at + 1] = min;
 }
 
 /**
@@ -108,14 +133,12 @@ export function envelopeAt(analysis: Analysis, id: string, x: number, side: Side
   const k = locateInterval(analysis.grid, x, side);
   const u = x - analysis.grid[k]!;
   const parts = new Float64Array(3 * analysis.cases.length);
-  const out: Record<string, number> = {};
-  for (const quantity of ENVELOPE_QUANTITIES) {
+  const values = new Float64Array(6);
+  ENVELOPE_QUANTITIES.forEach((quantity, q) => {
     evaluateCaseParts(analysis, k, u, quantity, parts);
-    const [max, min] = envelopeOfSets(analysis, sets, parts);
-    out[quantity === "uy" ? "uyMax" : `${quantity}max`] = max;
-    out[quantity === "uy" ? "uyMin" : `${quantity}min`] = min;
-  }
-  return out as unknown as EnvelopeValues;
+    envelopeOfSets(analysis, sets, parts, values, 2 * q);
+  });
+  return { Vmax: values[0]!, Vmin: values[1]!, Mmax: values[2]!, Mmin: values[3]!, uyMax: values[4]!, uyMin: values[5]! };
 }
 
 /** Upper and lower envelope polylines, sampled like `diagram` (both values at each breakpoint). */
@@ -134,13 +157,16 @@ export function envelopeDiagram(analysis: Analysis, id: string, quantity: Envelo
   const s = Math.max(1, Math.floor(samplesPerPiece));
   const parts = new Float64Array(3 * analysis.cases.length);
   const out = { x: new Float64Array(K * (s + 1)), max: new Float64Array(K * (s + 1)), min: new Float64Array(K * (s + 1)) };
+  const pair = new Float64Array(2);
   for (let k = 0, p = 0; k < K; k++) {
     const h = grid[k + 1]! - grid[k]!;
     for (let i = 0; i <= s; i++, p++) {
       const u = i === s ? h : (h * i) / s;
       out.x[p] = i === s ? grid[k + 1]! : grid[k]! + u;
       evaluateCaseParts(analysis, k, u, quantity, parts);
-      [out.max[p], out.min[p]] = envelopeOfSets(analysis, sets, parts);
+      envelopeOfSets(analysis, sets, parts, pair, 0);
+      out.max[p] = pair[0]!;
+      out.min[p] = pair[1]!;
     }
   }
   return out;
@@ -151,6 +177,7 @@ export function reactionEnvelope(analysis: Analysis, id: string): ReactionEnvelo
   const sets = envelopeFactorSets(analysis, id);
   if (!sets) return undefined;
   const parts = new Float64Array(3 * analysis.cases.length);
+  const pair = new Float64Array(2);
   return analysis.supportedNodes.map((node, r) => {
     const row: ReactionEnvelope = { node, fyMax: 0, fyMin: 0, mzMax: 0, mzMin: 0 };
     for (const key of ["fy", "mz"] as const) {
@@ -162,9 +189,9 @@ export function reactionEnvelope(analysis: Analysis, id: string): ReactionEnvelo
         parts[3 * c + 1] = positive;
         parts[3 * c + 2] = negative;
       });
-      const [max, min] = envelopeOfSets(analysis, sets, parts);
-      if (key === "fy") [row.fyMax, row.fyMin] = [max, min];
-      else [row.mzMax, row.mzMin] = [max, min];
+      envelopeOfSets(analysis, sets, parts, pair, 0);
+      if (key === "fy") [row.fyMax, row.fyMin] = [pair[0]!, pair[1]!];
+      else [row.mzMax, row.mzMin] = [pair[0]!, pair[1]!];
     }
     return row;
   });
