@@ -110,7 +110,8 @@ export function createHandoffsService(deps: { db: Db; clock: Clock; beams: Beams
           project: ctx.project.name,
           beam: ctx.beam.name,
           revision: ctx.revision.version,
-          revisionUrl: `${deps.publicUrl}/projects/${ids.projectId}/beams/${ids.beamId}?revision=${ids.version}`,
+          // the web app's read-only revision page
+          revisionUrl: `${deps.publicUrl}/projects/${ids.projectId}/beams/${ids.beamId}/revisions/${ids.version}`,
           issuedBy: issuer,
           csv: { filename: csv.filename, content: csv.content },
           pdf: { filename: pdf.filename, content: pdf.content },

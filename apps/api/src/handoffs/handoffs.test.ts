@@ -45,7 +45,7 @@ describe("hand-off", () => {
     expect(new Set(mail!.to)).toEqual(new Set([team.viewer.email, external]));
     expect(mail!.subject).toBe("Support reactions: Harbour Workshop, Roof beam B2, revision 1");
     expect(mail!.text).toContain("Reactions for the pile caps on grid C.");
-    expect(mail!.text).toContain(`/projects/${team.projectId}/beams/${team.beamId}?revision=1`);
+    expect(mail!.text).toContain(`/projects/${team.projectId}/beams/${team.beamId}/revisions/1`);
     const files = mail!.attachments.map((a) => [a.filename, a.contentType]);
     expect(files).toEqual([
       ["roof-beam-b2-rev-1-reactions.csv", "text/csv"],
