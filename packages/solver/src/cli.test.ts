@@ -28,7 +28,8 @@ function file(name: string, text: string): string {
   return path;
 }
 
-describe("solve command line", () => {
+// Each case spawns Node with tsx, which can take seconds on a busy machine.
+describe("solve command line", { timeout: 60_000 }, () => {
   it("prints the result JSON and exits 0 for a file", () => {
     const { status, stdout } = run([file("good.json", JSON.stringify(good))]);
     expect(status).toBe(0);
