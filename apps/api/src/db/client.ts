@@ -17,6 +17,9 @@ export function connectDatabase(url: string, options: { max?: number } = {}): Da
   const client = postgres(url, {
     max: options.max ?? 10,
     connect_timeout: 5,
+    // postgres.js waits up to 20 s between reconnects after failures; during an outage requests
+    // would queue behind that wait instead of failing with 503, and recovery would lag as long
+    backoff: (retries: number) => Math.min(0.05 * 2 ** retries, 0.5),
     onnotice: () => {},
   });
   const db = drizzle(client, { schema });
