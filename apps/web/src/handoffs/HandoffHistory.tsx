@@ -1,6 +1,7 @@
 import { Link } from "react-router";
 import type { Handoff } from "@spanwright/contracts";
 import { formatDate } from "../formatDate";
+import { hasOutdatedRecipients, isRecipientOutdated } from "./staleHandoffs";
 
 /** Who issued which revision to whom, and when; newest first as the API sends it. */
 export function HandoffHistory({ handoffs, showBeam = false }: { handoffs: readonly Handoff[]; showBeam?: boolean }) {
@@ -31,7 +32,7 @@ export function HandoffHistory({ handoffs, showBeam = false }: { handoffs: reado
               )}
               <td className="tabular whitespace-nowrap py-2 pr-3">
                 r{h.version}
-                {h.stale && (
+                {hasOutdatedRecipients(h) && (
                   <span className="ml-2 rounded-sm bg-ochre-100 px-1.5 py-0.5 text-xs font-semibold text-ochre-800" title={`r${h.latestVersion} changes ${h.staleValueCount} issued value(s) beyond the threshold`}>
                     outdated
                   </span>
@@ -39,7 +40,14 @@ export function HandoffHistory({ handoffs, showBeam = false }: { handoffs: reado
               </td>
               <td className="py-2 pr-3 text-paper-800">{h.issuedBy.name}</td>
               <td className="py-2 pr-3 text-paper-800">
-                {h.recipients.map((r) => (r.name !== null ? `${r.name} <${r.email}>` : r.email)).join(", ")}
+                <ul>
+                  {h.recipients.map((r) => (
+                    <li key={r.email}>
+                      {r.name !== null ? `${r.name} <${r.email}>` : r.email}
+                      {isRecipientOutdated(h, r) && <span className="ml-1 text-xs font-semibold text-ochre-800">(holds outdated reactions)</span>}
+                    </li>
+                  ))}
+                </ul>
                 {h.message !== null && <p className="mt-0.5 text-xs italic text-paper-600">{`“${h.message}”`}</p>}
               </td>
               <td className="max-w-[14rem] break-all py-2 pr-3 font-mono text-xs text-paper-600">{h.messageId}</td>

@@ -3,7 +3,7 @@ import { Link } from "react-router";
 import type { Handoff } from "@spanwright/contracts";
 import { Button, buttonClasses } from "../components/Button";
 import { HandoffDialog } from "./HandoffDialog";
-import { outdatedHandoffs, outdatedRecipients } from "./staleHandoffs";
+import { oldestOutdatedVersion, outdatedHandoffs, outdatedRecipients } from "./staleHandoffs";
 
 /**
  * The alert that the foundation designer holds outdated reactions: a newer revision changes an
@@ -19,16 +19,17 @@ export function StaleHandoffBanner({ handoffs, canIssue }: { handoffs: readonly 
       <ul className="space-y-2">
         {outdated.map((h) => {
           const to = outdatedRecipients(handoffs, h.beamId).map((r) => r.name ?? r.email).join(", ");
+          const held = oldestOutdatedVersion(handoffs, h.beamId) ?? h.version;
           return (
             <li key={h.id} className="flex flex-wrap items-center gap-x-3 gap-y-1">
               <span>
-                {`${h.beamName}: r${h.latestVersion} changes ${h.staleValueCount} issued value${h.staleValueCount === 1 ? "" : "s"} of r${h.version}, held by ${to}.`}
+                {`${h.beamName}: r${h.latestVersion} changes issued reactions of r${held} beyond the project threshold; held by ${to}.`}
               </span>
               <Link
-                to={`/projects/${h.projectId}/beams/${h.beamId}/compare?from=${h.version}&to=${h.latestVersion}`}
+                to={`/projects/${h.projectId}/beams/${h.beamId}/compare?from=${held}&to=${h.latestVersion}`}
                 className={buttonClasses("secondary", "sm")}
               >
-                {`Compare r${h.version} with r${h.latestVersion}`}
+                {`Compare r${held} with r${h.latestVersion}`}
               </Link>
               {canIssue && (
                 <Button size="sm" variant="accent" onClick={() => setReissuing(h)}>
