@@ -7,6 +7,7 @@ import {
   clickOnBeam,
   momentExtremesOf,
   openTableTab,
+  paletteButton,
   saveButtonOf,
   saveStateOf,
   typeQuantity,
@@ -138,6 +139,79 @@ describe("the beam editor in a real browser", () => {
       expect(revisions.body.revisions.map((r: { version: number }) => r.version)).toEqual([3, 2, 1]);
       const beams = expectStatus(await lead.client.get(`/api/projects/${projectId}/beams`), 200, "beams");
       expect(beams.body.beams.map((b: { name: string }) => b.name)).toContain(`${beamName} (my version)`);
+      await context.close();
+    },
+    flowTimeoutMs,
+  );
+
+  it(
+    "models a beam from a template with mouse and keyboard, solves it live, saves it and finds it again after a reload",
+    async () => {
+      const beamName = "Mezzanine beam M1";
+      const context = await env.newContext();
+      const page = await context.newPage();
+      await signInThroughForm(page, lead, `/projects/${projectId}`);
+
+      // A new beam from a template, through the project page's form.
+      const form = page.getByRole("form", { name: "New beam" });
+      await form.getByLabel("Beam name").fill(beamName);
+      await form.getByLabel("Start from").selectOption({ label: "Simple span, 6 m" });
+      await env.screenshot(page, "project");
+      await form.getByRole("button", { name: "Add beam" }).click();
+      await page.waitForURL(new RegExp(`/projects/${projectId}/beams/[^/]+$`));
+      const editorPath = new URL(page.url()).pathname;
+      await waitForEditor(page, beamName);
+      await saveStateOf(page).filter({ hasText: "r1 · saved" }).waitFor();
+      // 5 kN/m over a 6 m simple span: wL²/8 = 22.5 kN·m at midspan (statics, common practice).
+      const initial = (await momentExtremesOf(page).textContent()) ?? "";
+      expect(initial).toContain("22.5 kN·m at 3 m");
+
+      // Mouse: split the span with the palette's Split tool, then drop a point load on the beam.
+      await paletteButton(page, "Split").click();
+      await clickOnBeam(page, 0.3);
+      expect(await bodyRowsOf(await openTableTab(page, "Nodes")).count()).toBe(3);
+      await paletteButton(page, "Point load").click();
+      await clickOnBeam(page, 0.7);
+      await expect.poll(() => momentExtremesOf(page).textContent(), { timeout: 20_000 }).not.toBe(initial);
+      expect(await bodyRowsOf(await openTableTab(page, "Loads")).count()).toBe(2);
+
+      // Keyboard: another span by splitting segment 2, exact node positions, a second point load,
+      // and exact values for the load placed with the mouse.
+      const segments = await openTableTab(page, "Segments");
+      await segments.getByRole("button", { name: "Split segment 2 at its middle" }).focus();
+      await page.keyboard.press("Enter");
+      const nodes = await openTableTab(page, "Nodes");
+      await bodyRowsOf(nodes).nth(3).waitFor();
+      await typeQuantity(nodes, /^Node 2 x /, "2");
+      await typeQuantity(nodes, /^Node 3 x /, "4");
+      const loads = await openTableTab(page, "Loads");
+      await loads.getByRole("button", { name: "+ Point" }).focus();
+      await page.keyboard.press("Enter");
+      await bodyRowsOf(loads).nth(2).waitFor();
+      await typeQuantity(loads, /^Load 2 x /, "3");
+      await typeQuantity(loads, /^Load 2 force /, "-20");
+      await typeQuantity(loads, /^Load 3 x /, "1.5");
+      await typeQuantity(loads, /^Load 3 force /, "-10");
+
+      // Statics of the 6 m simple span (common practice): R_A = 15 + 20·3/6 + 10·4.5/6 = 32.5 kN;
+      // M(3 m) = 32.5·3 − 5·3²/2 − 10·1.5 = 60 kN·m, the maximum (shear changes sign at the 20 kN load).
+      await expect.poll(() => momentExtremesOf(page).textContent(), { timeout: 20_000 }).toContain("60 kN·m at 3 m");
+      await saveStateOf(page).filter({ hasText: "r1 · unsaved changes" }).waitFor();
+      await env.screenshot(page, "editor");
+
+      await saveButtonOf(page).click();
+      await saveStateOf(page).filter({ hasText: "r2 · saved" }).waitFor();
+
+      // After a reload: the same beam, version 2, four nodes, three loads and the same results.
+      await page.reload();
+      await waitForEditor(page, beamName);
+      expect(new URL(page.url()).pathname).toBe(editorPath);
+      await saveStateOf(page).filter({ hasText: "r2 · saved" }).waitFor();
+      expect(await bodyRowsOf(await openTableTab(page, "Nodes")).count()).toBe(4);
+      const reloadedLoads = await openTableTab(page, "Loads");
+      expect(await bodyRowsOf(reloadedLoads).count()).toBe(3);
+      expect(await reloadedLoads.getByLabel(/^Load 2 force /).inputValue()).toBe("-20");
+      expect(await momentExtremesOf(page).textContent()).toContain("60 kN·m at 3 m");
       await context.close();
     },
     flowTimeoutMs,

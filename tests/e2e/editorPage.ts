@@ -49,12 +49,18 @@ export async function openTableTab(page: Page, name: "Nodes" | "Segments" | "Loa
   return panel;
 }
 
-/** Types an exact value into a labelled quantity cell and commits it with Enter. */
+/** Types an exact value, key by key, into a labelled quantity cell and commits it with Enter. */
 export async function typeQuantity(scope: Locator, label: RegExp, text: string): Promise<void> {
   const cell = scope.getByLabel(label);
-  await cell.fill(text);
+  await cell.focus();
+  await cell.press("Control+A");
+  await cell.pressSequentially(text);
   await cell.press("Enter");
 }
 
 /** Rows of the open table's body. */
 export const bodyRowsOf = (panel: Locator): Locator => panel.locator("tbody tr");
+
+/** A toolbar button of the editor's palette, by its visible label ("Split", "Point load", ...). */
+export const paletteButton = (page: Page, name: string): Locator =>
+  page.getByRole("toolbar", { name: "Beam tools" }).getByRole("button", { name, exact: true });
