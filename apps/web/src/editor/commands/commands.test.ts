@@ -4,7 +4,7 @@ import { applyPatch } from "../model/patch";
 import { createLoadId, createNodeId, createSegmentId } from "../model/ids";
 import { toExchange } from "../model/exchange";
 import type { CommandResult } from "./DocChange";
-import { addSpan, deleteNode, moveNode, setSupport, splitSpan, toggleHinge } from "./nodeCommands";
+import { addSpan, deleteNode, moveNode, setSpringStiffness, setSupport, splitSpan, toggleHinge } from "./nodeCommands";
 import { editSegment, setSegmentLength } from "./segmentCommands";
 import { addLoad, deleteLoad, editLoad, moveLoad } from "./loadCommands";
 import { addCombination, addLoadCase, deleteLoadCase, editLoadCase, setCombinationFactor } from "./caseCommands";
@@ -46,6 +46,10 @@ describe("commands change the document as named", () => {
     }],
     ["setSupport sets a spring", (d) => setSupport(d, { nodeId: ids.n1, support: { type: "spring", ky: 5e7 } }), (d) =>
       expect(d.nodes[1]!.support).toEqual({ type: "spring", ky: 5e7 })],
+    ["setSpringStiffness adds kr and keeps ky", (d) => setSpringStiffness(run(setSupport(d, { nodeId: ids.n1, support: { type: "spring", ky: 5e7 } }), d), { nodeId: ids.n1, kr: 1e6 }), (d) =>
+      expect(d.nodes[1]!.support).toEqual({ type: "spring", ky: 5e7, kr: 1e6 })],
+    ["setSpringStiffness null clears one stiffness", (d) => setSpringStiffness(run(setSupport(d, { nodeId: ids.n1, support: { type: "spring", ky: 5e7, kr: 1e6 } }), d), { nodeId: ids.n1, ky: null }), (d) =>
+      expect(d.nodes[1]!.support).toEqual({ type: "spring", kr: 1e6 })],
     ["setSupport null removes the support", (d) => setSupport(d, { nodeId: ids.n2, support: null }), (d) => expect(d.nodes[2]!.support).toBeNull()],
     ["toggleHinge adds a hinge", (d) => toggleHinge(d, { nodeId: ids.n1 }), (d) => expect(d.nodes[1]!.hinge).toBe(true)],
     ["deleteNode merges the two segments and drops its settlements", (d) => deleteNode(d, { nodeId: ids.n1 }), (d) => {
@@ -98,6 +102,7 @@ describe("commands change the document as named", () => {
     ["splitting outside the segment", (d) => splitSpan(d, { segmentId: ids.s0, x: 7 }), "invalid-position"],
     ["a zero-length span", (d) => addSpan(d, { length: 0 }), "invalid-value"],
     ["a spring with no stiffness", (d) => setSupport(d, { nodeId: ids.n0, support: { type: "spring", ky: 0 } }), "invalid-value"],
+    ["clearing the only spring stiffness", (d) => setSpringStiffness(run(setSupport(d, { nodeId: ids.n1, support: { type: "spring", ky: 5e7 } }), d), { nodeId: ids.n1, ky: null }), "invalid-value"],
     ["a negative second moment of area", (d) => editSegment(d, { segmentId: ids.s0, props: { I: -1 } }), "invalid-value"],
     ["a load off the beam", (d) => addLoad(d, { caseId: ids.dead, load: { id: createLoadId(), type: "point", x: 13, fy: -1 } }), "invalid-value"],
     ["a distributed load ending before it starts", (d) => addLoad(d, { caseId: ids.dead, load: { id: createLoadId(), type: "distributed", x1: 5, x2: 4, qy1: -1, qy2: -1 } }), "invalid-value"],

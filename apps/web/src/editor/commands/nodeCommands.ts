@@ -113,6 +113,19 @@ export function setSupport(doc: BeamDocument, args: { nodeId: NodeId; support: S
   });
 }
 
+/** Sets or clears (null) a spring's stiffnesses, ky in N/m and kr in N·m/rad, making the node's
+ * support a spring if it was not one. At least one stiffness must stay above zero. */
+export function setSpringStiffness(doc: BeamDocument, args: { nodeId: NodeId; ky?: number | null; kr?: number | null }): CommandResult {
+  const node = doc.nodes.find((n) => n.id === args.nodeId);
+  if (!node) return refused("not-found", "That node no longer exists.");
+  const current = node.support?.type === "spring" ? node.support : { type: "spring" as const };
+  const pick = (next: number | null | undefined, old: number | undefined) => (next === undefined ? old : next === null ? undefined : next);
+  const ky = pick(args.ky, current.ky);
+  const kr = pick(args.kr, current.kr);
+  const support: Support = { type: "spring", ...(ky !== undefined ? { ky } : {}), ...(kr !== undefined ? { kr } : {}) };
+  return setSupport(doc, { nodeId: node.id, support });
+}
+
 export function toggleHinge(doc: BeamDocument, args: { nodeId: NodeId }): CommandResult {
   if (!doc.nodes.some((n) => n.id === args.nodeId)) return refused("not-found", "That node no longer exists.");
   return changed(doc, "Toggle hinge", {

@@ -1,3 +1,4 @@
+import { useMemo } from "react";
 import type { Analysis, Quantity } from "@spanwright/solver";
 import { formatQuantity } from "../units/formatQuantity";
 import type { UnitSystemId } from "../units/unitSystems";
@@ -13,8 +14,12 @@ function pair(values: readonly [number, number], units: UnitSystemId, q: Quantit
 /** Exact numbers beside the diagrams: the hover cursor's values, extremes, reactions. */
 export function ResultsReadout({ analysis, name, isEnvelope, hoverX, units }: { analysis: Analysis; name: string; isEnvelope: boolean; hoverX: number | null; units: UnitSystemId }) {
   const at = hoverX === null ? null : readAt(analysis, name, isEnvelope, hoverX);
-  const reactions = reactionsFor(analysis, name, isEnvelope);
-  const extremes = quantities.filter((q) => q !== "rz").map((q) => ({ q, s: seriesFor(analysis, name, isEnvelope, q) }));
+  // Extremes and reactions depend on the result only; the hover cursor must not recompute them.
+  const reactions = useMemo(() => reactionsFor(analysis, name, isEnvelope), [analysis, name, isEnvelope]);
+  const extremes = useMemo(
+    () => quantities.filter((q) => q !== "rz").map((q) => ({ q, s: seriesFor(analysis, name, isEnvelope, q) })),
+    [analysis, name, isEnvelope],
+  );
   return (
     <div className="space-y-3 text-sm">
       <section aria-live="polite">

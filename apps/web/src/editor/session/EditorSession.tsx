@@ -33,13 +33,11 @@ export interface EditorSessionProps {
 export function EditorSession({ projectId, initial, units, canEdit }: EditorSessionProps) {
   const beamId = initial.beam.id;
   const key = draftKey(projectId, beamId);
-  const [loadProblem] = useState<string | null>(() => {
+  const [{ store, loadProblem }] = useState(() => {
     const r = importModel(initial.revision.model, units);
-    return r.ok ? null : r.message;
-  });
-  const [store] = useState(() => {
-    const r = importModel(initial.revision.model, units);
-    return new EditorStore(r.ok ? r.doc : createTemplate("simple-span", units));
+    return r.ok
+      ? { store: new EditorStore(r.doc), loadProblem: null }
+      : { store: new EditorStore(createTemplate("simple-span", units)), loadProblem: r.message };
   });
   const [baseVersion, setBaseVersion] = useState(initial.revision.version);
   const [draft, setDraft] = useState<Draft | null>(() => {

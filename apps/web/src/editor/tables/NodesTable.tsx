@@ -1,5 +1,6 @@
-import { deleteNode, moveNode, setSupport, toggleHinge } from "../commands/nodeCommands";
-import type { Support, SupportType } from "../model/BeamDocument";
+import { deleteNode, moveNode, setSpringStiffness, setSupport, toggleHinge } from "../commands/nodeCommands";
+import type { SupportType } from "../model/BeamDocument";
+import type { NodeId } from "../model/ids";
 import { supportTypes } from "../model/BeamDocument";
 import { QuantityInput } from "../fields/QuantityInput";
 import { useEditor, useEditorStore } from "../store/useEditor";
@@ -13,12 +14,8 @@ export function NodesTable() {
   const doc = useEditor((s) => s.history.doc);
   const selection = useEditor((s) => s.ui.selection);
   const units = doc.units;
-  const setSpring = (nodeId: (typeof doc.nodes)[number]["id"], support: Support | null, patch: { ky?: number | undefined; kr?: number | undefined }) => {
-    const base = support?.type === "spring" ? support : { type: "spring" as const };
-    const next: Record<string, unknown> = { ...base, ...patch };
-    for (const k of ["ky", "kr"]) if (next[k] === undefined) delete next[k];
-    return store.run((d) => setSupport(d, { nodeId, support: next as Support }));
-  };
+  const setSpring = (nodeId: NodeId, stiffness: { ky?: number | null; kr?: number | null }) =>
+    store.run((d) => setSpringStiffness(d, { nodeId, ...stiffness }));
   return (
     <table className={c.table} onKeyDown={navigateGrid}>
       <thead className={c.head}>
@@ -58,12 +55,12 @@ export function NodesTable() {
               </td>
               <td className={c.td}>
                 {isSpring && n.support?.type === "spring" ? (
-                  <QuantityInput label={`Node ${i + 1} ky`} value={n.support.ky} kind="springK" units={units} onCommit={(ky) => setSpring(n.id, n.support, { ky })} onClear={() => setSpring(n.id, n.support, { ky: undefined })} />
+                  <QuantityInput label={`Node ${i + 1} ky`} value={n.support.ky} kind="springK" units={units} onCommit={(ky) => setSpring(n.id, { ky })} onClear={() => setSpring(n.id, { ky: null })} />
                 ) : null}
               </td>
               <td className={c.td}>
                 {isSpring && n.support?.type === "spring" ? (
-                  <QuantityInput label={`Node ${i + 1} kr`} value={n.support.kr} kind="springKr" units={units} onCommit={(kr) => setSpring(n.id, n.support, { kr })} onClear={() => setSpring(n.id, n.support, { kr: undefined })} />
+                  <QuantityInput label={`Node ${i + 1} kr`} value={n.support.kr} kind="springKr" units={units} onCommit={(kr) => setSpring(n.id, { kr })} onClear={() => setSpring(n.id, { kr: null })} />
                 ) : null}
               </td>
               <td className={`${c.td} text-center`}>

@@ -31,6 +31,8 @@ export function EditorCanvas({ errorRange }: { errorRange: ErrorRange | null }) 
   const width = useElementWidth(container);
   const layout = useMemo(() => layoutScene(doc, camera, visibleCases), [doc, camera, visibleCases]);
   const runner = useRef(new ToolRunner(toolsById.select));
+  const layoutRef = useRef(layout);
+  layoutRef.current = layout;
   const fitted = useRef(false);
 
   const ctx: ToolContext = useMemo(
@@ -63,7 +65,8 @@ export function EditorCanvas({ errorRange }: { errorRange: ErrorRange | null }) 
     const py = e.clientY - rect.top;
     const ui = store.getState().ui;
     const x = screenToWorldX(ui.camera, px);
-    const target = hitTest(layoutScene(store.doc, ui.camera, ui.visibleCases), px, py);
+    // Hit-test what is on screen: the layout of the last render.
+    const target = hitTest(layoutRef.current, px, py);
     runner.current.handle({ type, px, py, x, target }, ctx);
     if (type === "move") store.setUi({ hoverX: x });
   };

@@ -1,9 +1,9 @@
 import type { ReactNode } from "react";
 import { deleteLoad, editLoad } from "../commands/loadCommands";
-import { deleteNode, moveNode, setSupport, toggleHinge } from "../commands/nodeCommands";
+import { deleteNode, moveNode, setSpringStiffness, setSupport, toggleHinge } from "../commands/nodeCommands";
 import { editSegment, setSegmentLength } from "../commands/segmentCommands";
 import { QuantityInput } from "../fields/QuantityInput";
-import { findLoad, findNode, supportTypes, type Load, type Support, type SupportType } from "../model/BeamDocument";
+import { findLoad, findNode, supportTypes, type Load, type SupportType } from "../model/BeamDocument";
 import type { CaseId } from "../model/ids";
 import { useEditor, useEditorStore } from "../store/useEditor";
 import { defaultSupport } from "../tools/placeSupport/placeSupportTool";
@@ -33,7 +33,7 @@ export function Inspector() {
     if (!node) return null;
     const index = doc.nodes.indexOf(node);
     const spring = node.support?.type === "spring" ? node.support : null;
-    const setSpring = (patch: Partial<Extract<Support, { type: "spring" }>>) => run((d) => setSupport(d, { nodeId: node.id, support: { ...(spring ?? { type: "spring" }), ...patch } }));
+    const setSpring = (stiffness: { ky?: number | null; kr?: number | null }) => run((d) => setSpringStiffness(d, { nodeId: node.id, ...stiffness }));
     return (
       <div className="space-y-2">
         <h3 className="text-sm font-semibold text-ink-900">Node {index + 1}</h3>
@@ -47,8 +47,8 @@ export function Inspector() {
             {supportTypes.map((t) => <option key={t} value={t}>{t}</option>)}
           </select>
         </Field>
-        {spring && <Field label="ky"><QuantityInput label="Spring ky" value={spring.ky} kind="springK" units={u} onCommit={(ky) => setSpring({ ky })} /></Field>}
-        {spring && <Field label="kr"><QuantityInput label="Spring kr" value={spring.kr} kind="springKr" units={u} onCommit={(kr) => setSpring({ kr })} /></Field>}
+        {spring && <Field label="ky"><QuantityInput label="Spring ky" value={spring.ky} kind="springK" units={u} onCommit={(ky) => setSpring({ ky })} onClear={() => setSpring({ ky: null })} /></Field>}
+        {spring && <Field label="kr"><QuantityInput label="Spring kr" value={spring.kr} kind="springKr" units={u} onCommit={(kr) => setSpring({ kr })} onClear={() => setSpring({ kr: null })} /></Field>}
         <Field label="Hinge"><input type="checkbox" aria-label="Hinge" checked={node.hinge} onChange={() => run((d) => toggleHinge(d, { nodeId: node.id }))} /></Field>
         <button type="button" className={deleteClass} onClick={() => run((d) => deleteNode(d, { nodeId: node.id }))}>Delete node</button>
       </div>
