@@ -37,6 +37,13 @@ export function MaterialPicker({ units, initial, kinds, onChange }: MaterialPick
   const [base, setBase] = useState<Material>(first);
   const [choice, setChoice] = useState<string>(first.id);
   const [text, setText] = useState(() => textOf(first, units));
+  const [textUnits, setTextUnits] = useState(units);
+  if (textUnits !== units) {
+    // Typed values are in the old display units: carry them over.
+    const convert = (s: string) => (s.trim() === "" || !Number.isFinite(Number(s)) ? s : editableDesign(fromDesignDisplay(Number(s), textUnits, "stress"), units, "stress"));
+    setTextUnits(units);
+    setText({ E: convert(text.E), G: convert(text.G), Fy: convert(text.Fy) });
+  }
   const [edited, setEdited] = useState(false);
   const [error, setError] = useState<{ field: string; message: string } | null>(null);
 

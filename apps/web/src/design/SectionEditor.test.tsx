@@ -35,3 +35,13 @@ describe("SectionEditor", () => {
     expect(screen.getByText("Fix the highlighted field to see the properties.")).toBeTruthy();
   });
 });
+
+describe("SectionEditor unit switch", () => {
+  it("keeps the section when the display units change", () => {
+    const { rerender } = render(<SectionEditor units="si" initialShape={{ kind: "rectangle", b: 0.2032, h: 0.4064 }} />);
+    rerender(<SectionEditor units="us" initialShape={{ kind: "rectangle", b: 0.2032, h: 0.4064 }} />);
+    // 203.2 mm = 8 in and 406.4 mm = 16 in exactly; I = 8·16³/12 = 2730.67 in⁴.
+    expect((screen.getByLabelText("Width b (in)") as HTMLInputElement).value).toBe("8");
+    expect(cell("I")).toBe("2731 in⁴");
+  });
+});

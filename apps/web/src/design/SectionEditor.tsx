@@ -15,7 +15,7 @@ import type { UnitSystemId } from "../editor/units/unitSystems";
 import type { Theory } from "../editor/model/BeamDocument";
 import { designUnit } from "./designUnits";
 import { SectionPropertiesTable } from "./SectionPropertiesTable";
-import { DEFAULT_SHAPES, fieldTextOf, SECTION_KINDS, SHAPE_FIELDS, SHAPE_LABELS, shapeInputOf, type FieldText } from "./shapeFields";
+import { convertFieldText, DEFAULT_SHAPES, fieldTextOf, SECTION_KINDS, SHAPE_FIELDS, SHAPE_LABELS, shapeInputOf, type FieldText } from "./shapeFields";
 
 /** What the editor emits whenever the typed section is valid. */
 export interface SectionChange {
@@ -43,6 +43,12 @@ export function SectionEditor({ initialShape, units, material, theory = "euler-b
   const [kind, setKind] = useState<SectionKind>(start.kind);
   const [orientation, setOrientation] = useState(start.kind === "tee" ? start.orientation : "flange-top");
   const [text, setText] = useState<FieldText>(() => fieldTextOf(start, units));
+  const [textUnits, setTextUnits] = useState(units);
+  if (textUnits !== units) {
+    // The typed text is in the old display units: carry the values over (React's "adjust state on prop change").
+    setTextUnits(units);
+    setText(convertFieldText(kind, text, textUnits, units));
+  }
 
   const computed = useMemo(() => sectionProperties(shapeInputOf(kind, text, units, orientation)), [kind, text, units, orientation]);
 

@@ -100,3 +100,14 @@ export function shapeInputOf(kind: SectionKind, text: FieldText, system: UnitSys
   if (kind === "tee") input.orientation = orientation ?? "flange-top";
   return input;
 }
+
+/** Re-expresses typed values in another unit system; text that is not a number is kept as typed. */
+export function convertFieldText(kind: SectionKind, text: FieldText, from: UnitSystemId, to: UnitSystemId): FieldText {
+  const next: Record<string, string> = { ...text };
+  for (const f of SHAPE_FIELDS[kind]) {
+    const raw = (text[f.key] ?? "").trim();
+    const n = Number(raw);
+    if (raw !== "" && Number.isFinite(n)) next[f.key] = editableDesign(fromDesignDisplay(n, from, f.quantity), to, f.quantity);
+  }
+  return next;
+}
