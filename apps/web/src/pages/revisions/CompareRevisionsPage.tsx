@@ -8,6 +8,7 @@ import { Caution } from "../../components/Caution";
 import { Card } from "../../components/PageHeader";
 import { Loading, QueryError } from "../../components/QueryState";
 import { CompareTable } from "../../revisions/CompareTable";
+import { ReactionTable } from "../../revisions/ReactionTable";
 import { NotFoundPage } from "../NotFoundPage";
 import { BeamPageHeader } from "./BeamPageHeader";
 import { useBeamParams } from "./useBeamParams";
@@ -113,6 +114,19 @@ function CompareResult({ data }: { data: CompareResponse }) {
       <Card title="Reactions">
         <CompareTable values={data.values} units={data.units} thresholdPct={data.thresholdPercent} from={data.from} to={data.to} />
       </Card>
+      <details className="rounded-lg border border-paper-300 bg-white px-5 py-3 shadow-card">
+        <summary className="cursor-pointer text-base font-semibold text-ink-900">Both reaction tables side by side</summary>
+        <div className="mt-4 grid gap-6 xl:grid-cols-2">
+          <section aria-label={`Reactions of r${data.from}`} className="min-w-0">
+            <h3 className="mb-2 text-sm font-semibold text-ink-900">{`r${data.from}`}</h3>
+            <ReactionTable table={data.before} units={data.units} caption={`Support reactions of r${data.from}`} />
+          </section>
+          <section aria-label={`Reactions of r${data.to}`} className="min-w-0">
+            <h3 className="mb-2 text-sm font-semibold text-ink-900">{`r${data.to}`}</h3>
+            <ReactionTable table={data.after} units={data.units} caption={`Support reactions of r${data.to}`} />
+          </section>
+        </div>
+      </details>
     </>
   );
 }
