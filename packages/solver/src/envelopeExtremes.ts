@@ -1,5 +1,5 @@
 import type { Analysis } from "./analysisTypes.js";
-import { envelopeFactorSets, ENVELOPE_QUANTITIES, type EnvelopeQuantity, type FactorSet } from "./envelopeQueries.js";
+import { combineParts, envelopeFactorSets, ENVELOPE_QUANTITIES, evaluateCaseParts, type EnvelopeQuantity, type FactorSet } from "./envelopeQueries.js";
 import { QUANTITY_LAYOUT, type Extreme, type Extremes } from "./fieldQueries.js";
 import { evaluatePolynomial, findSignChanges } from "./polynomial.js";
 import { COEFFICIENTS_PER_INTERVAL } from "./segmentField.js";
@@ -92,33 +92,48 @@ function visitFactorSet(context: EnvelopeExtremesContext, factors: FactorSet, qu
   const base = new Float64Array(n);
   const upper = new Float64Array(n);
   const lower = new Float64Array(n);
+  const shifted = new Float64Array(n);
   const derivative = new Float64Array(degree);
   const cursor = new Int32Array(patterned.length);
+  seedWithBreakpoints(analysis, factors, quantity, tracker);
+  /** Visits the ends and interior stationary points of poly on [a, b] unless a bound rules it out. */
   const visit = (poly: Float64Array, a: number, b: number, x0: number, h: number, x1: number, isUpper: boolean) => {
-    // The interval's right end is reported at the breakpoint itself, not x0 + h (rounding).
-    const consider = (u: number) => {
+    // Taylor coefficients at a: for t in [0, b − a] every tʲ ≥ 0, so d₀ + Σ max(0, dⱼ)(b − a)ʲ
+    // bounds the polynomial from above (min for below); skip when it cannot beat the best so far.
+    shifted.set(poly);
+    for (let i = 0; i < degree; i++) for (let j = degree - 1; j >= i; j--) shifted[j]! += a * shifted[j + 1]!;
+    const w = b - a;
+    let bound = shifted[0]!;
+    let power = 1;
+    for (let j = 1; j <= degree; j++) {
+      power *= w;
+      const term = shifted[j]! * power;
+      bound += isUpper ? Math.max(0, term) : Math.min(0, term);
+    }
+    if (isUpper ? bound <= tracker.max.value : bound >= tracker.min.value) return;
+    for (let i = 1; i <= degree; i++) derivative[i - 1] = i * poly[i]!;
+    const candidates = findSignChanges(derivative, 0, degree - 1, a, b);
+    candidates.push(a, b);
+    for (const u of candidates) {
       const v = evaluatePolynomial(poly, 0, degree, u);
+      // The interval's right end is reported at the breakpoint itself, not x0 + h (rounding).
       if (isUpper ? v > tracker.max.value : v < tracker.min.value) {
         const x = u === h ? x1 : x0 + u;
         if (isUpper) tracker.max = { value: v, x };
         else tracker.min = { value: v, x };
       }
-    };
-    consider(a);
-    for (let i = 1; i <= degree; i++) derivative[i - 1] = i * poly[i]!;
-    for (const u of findSignChanges(derivative, 0, degree - 1, a, b)) consider(u);
-    consider(b);
+    }
   };
   for (let k = 0; k + 1 < grid.length; k++) {
     const o = k * COEFFICIENTS_PER_INTERVAL + offset;
+    const h = grid[k + 1]! - grid[k]!;
     base.fill(0);
     for (const { caseIndex, factor } of fixed) {
       const coef = analysis.cases[caseIndex]!.curve.coef;
       for (let i = 0; i < n; i++) base[i]! += factor * coef[o + i]!;
     }
     const splits = patterned.map((f) => context.splits[quantity][f.caseIndex]![k]!);
-    const cuts = splits.length === 1 ? splits[0]!.cuts : [...new Set(splits.flatMap((s) => s.cuts))].sort((a, b) => a - b);
-    if (cuts.length === 0) cuts.push(0, grid[k + 1]! - grid[k]!);
+    const cuts = splits.length === 1 ? splits[0]!.cuts : splits.length === 0 ? [0, h] : mergeSorted(splits.map((sp) => sp.cuts));
     cursor.fill(0);
     for (let c = 0; c + 1 < cuts.length; c++) {
       const a = cuts[c]!;
@@ -127,19 +142,46 @@ function visitFactorSet(context: EnvelopeExtremesContext, factors: FactorSet, qu
       const mid = 0.5 * (a + b);
       upper.set(base);
       lower.set(base);
-      patterned.forEach(({ factor }, p) => {
+      for (let p = 0; p < patterned.length; p++) {
+        const factor = patterned[p]!.factor;
         const split = splits[p]!;
         while (split.cuts[cursor[p]! + 1]! < mid) cursor[p]!++;
-        const s = cursor[p]! * n;
-        const [toUpper, toLower] = factor > 0 ? [split.positive, split.negative] : [split.negative, split.positive];
+        const at = cursor[p]! * n;
+        const toUpper = factor > 0 ? split.positive : split.negative;
+        const toLower = factor > 0 ? split.negative : split.positive;
         for (let i = 0; i < n; i++) {
-          upper[i]! += factor * toUpper[s + i]!;
-          lower[i]! += factor * toLower[s + i]!;
+          upper[i]! += factor * toUpper[at + i]!;
+          lower[i]! += factor * toLower[at + i]!;
         }
-      });
-      const h = grid[k + 1]! - grid[k]!;
+      }
       visit(upper, a, b, grid[k]!, h, grid[k + 1]!, true);
       visit(lower, a, b, grid[k]!, h, grid[k + 1]!, false);
+    }
+  }
+}
+
+/** Ascending union of sorted cut lists. */
+function mergeSorted(lists: number[][]): number[] {
+  const all = lists.flat().sort((p, q) => p - q);
+  return all.filter((v, i) => i === 0 || v !== all[i - 1]);
+}
+
+/**
+ * Starts the trackers from the envelope at every breakpoint (both sides), so the bounds in
+ * `visitFactorSet` can skip most sub-intervals: extremes often sit at supports and loads.
+ */
+function seedWithBreakpoints(analysis: Analysis, factors: FactorSet, quantity: EnvelopeQuantity, tracker: Tracker): void {
+  const grid = analysis.grid;
+  const parts = new Float64Array(3 * analysis.cases.length);
+  for (let k = 0; k + 1 < grid.length; k++) {
+    for (const [u, x] of [
+      [0, grid[k]!],
+      [grid[k + 1]! - grid[k]!, grid[k + 1]!],
+    ] as const) {
+      evaluateCaseParts(analysis, k, u, quantity, parts);
+      const [max, min] = combineParts(analysis, factors, parts);
+      if (max > tracker.max.value) tracker.max = { value: max, x };
+      if (min < tracker.min.value) tracker.min = { value: min, x };
     }
   }
 }
