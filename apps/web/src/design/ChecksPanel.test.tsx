@@ -79,4 +79,16 @@ describe("ChecksPanel", () => {
     expect(within(table).getAllByText(/flexure/i)).toHaveLength(3);
     expect(within(table).getAllByRole("row")).toHaveLength(1 + 5);
   });
+
+  it("checks a second deflection limit, L/240 dead + live, for the cases ticked under it", () => {
+    render(<ChecksPanel model={model} units="si" shape={shape} material={steel} />);
+    const total = screen.getAllByRole("group", { name: "Applies to" })[1]!;
+    fireEvent.click(within(total).getByLabelText("LRFD2"));
+    const table = screen.getByRole("table", { name: "Member checks" });
+    const rows = within(table).getAllByText(/Deflection/).map((el) => el.closest("tr") as HTMLElement);
+    expect(rows).toHaveLength(2);
+    // IBC 2021 Table 1604.3 floor members, D + L: L/240 = 6000/240 = 25 mm.
+    expect(cells(rows[1]!)).toContain("25 mm");
+    expect(cells(rows[1]!).join(" ")).toMatch(/δ ≤ L\/240/);
+  });
 });

@@ -1,10 +1,8 @@
 import { useMemo, useState } from "react";
 import {
-  DEFLECTION_LIMIT_PRESETS,
   governingRow,
   propertiesOfValidShape,
   validateSectionShape,
-  type DeflectionLimit,
   type DesignMethod,
   type Material,
   type ResultLike,
@@ -17,6 +15,7 @@ import { formatNumber } from "../editor/units/formatQuantity";
 import type { UnitSystemId } from "../editor/units/unitSystems";
 import { CheckTable } from "./CheckTable";
 import { computeBeamChecks } from "./computeBeamChecks";
+import { DeflectionRules, defaultRules, limitOfRule, type DeflectionRule } from "./DeflectionRules";
 import { DesignCaution } from "./DesignCaution";
 import { caseIds, combinationIds, type DesignModel } from "./designModel";
 import { designUnit, formatDesign, fromDesignDisplay } from "./designUnits";
@@ -33,11 +32,8 @@ export interface ChecksPanelProps {
   readonly material: Material;
 }
 
-const TYPED = "typed";
-
-function defaultDeflectionIds(model: DesignModel): string[] {
-  const live = model.loadCases.filter((c) => c.category === "live").map((c) => c.id);
-  return live.length > 0 ? live : caseIds(model).slice(0, 1);
+function liveCaseIds(model: DesignModel): string[] {
+  return model.loadCases.filter((c) => c.category === "live").map((c) => c.id);
 }
 
 /** Optional positive number typed in display units; null when blank or not a positive number. */
@@ -52,31 +48,27 @@ export function ChecksPanel({ model, result = null, units, shape, material }: Ch
   const cases = caseIds(model);
   const [method, setMethod] = useState<DesignMethod>("LRFD");
   const [lbText, setLbText] = useState("");
-  const [limitChoice, setLimitChoice] = useState<string>("floor-live");
-  const [ratioText, setRatioText] = useState("360");
   const [strengthIds, setStrengthIds] = useState<string[]>(() => (combos.length > 0 ? combos : cases));
-  const [deflectionIds, setDeflectionIds] = useState<string[]>(() => defaultDeflectionIds(model));
+  const [rules, setRules] = useState<DeflectionRule[]>(() => defaultRules(liveCaseIds(model)));
   const [allowBendingText, setAllowBendingText] = useState("");
   const [allowShearText, setAllowShearText] = useState("");
 
-  const limit = useMemo((): DeflectionLimit | null => {
-    const preset = DEFLECTION_LIMIT_PRESETS.find((p) => p.id === limitChoice);
-    const ratio = Number(ratioText);
-    return preset ? { kind: "preset", preset } : ratio > 0 ? { kind: "ratio", ratio } : null;
-  }, [limitChoice, ratioText]);
   const Lb = parsePositive(lbText, units, "length");
   const validShape = useMemo(() => validateSectionShape(shape), [shape]);
   const isIShape = shape.kind === "i-shape";
 
   const outcome = useMemo(() => {
     if (!validShape.ok) return { ok: false as const, message: `Section: ${validShape.error.message}` };
-    if (!limit) return { ok: false as const, message: "Type a deflection limit ratio greater than zero." };
+    const deflection = rules.flatMap((r) => {
+      const limit = limitOfRule(r);
+      return limit ? r.ids.map((id) => ({ id, limit })) : [];
+    });
     return computeBeamChecks({
-      model, result, shape: validShape.value, material, method, Lb, strengthIds, deflectionIds, deflectionLimit: limit,
+      model, result, shape: validShape.value, material, method, Lb, strengthIds, deflection,
       allowableBending: parsePositive(allowBendingText, units, "stress"),
       allowableShear: parsePositive(allowShearText, units, "stress"),
     });
-  }, [model, result, validShape, material, method, Lb, strengthIds, deflectionIds, limit, allowBendingText, allowShearText, units]);
+  }, [model, result, validShape, material, method, Lb, strengthIds, rules, allowBendingText, allowShearText, units]);
 
   const sectionI = validShape.ok ? propertiesOfValidShape(validShape.value).I : null;
   const mismatched = sectionI !== null && model.segments.some((s) => Math.abs(s.I - sectionI) > 0.02 * sectionI);
@@ -106,19 +98,9 @@ export function ChecksPanel({ model, result = null, units, shape, material }: Ch
         {!isIShape && (
           <TextField label={`Allowable shear stress (${designUnit(units, "stress")})`} name="allowable-shear" inputMode="decimal" value={allowShearText} onChange={(e) => setAllowShearText(e.target.value)} />
         )}
-        <SelectField
-          label="Deflection limit"
-          name="deflection-limit"
-          value={limitChoice}
-          options={[...DEFLECTION_LIMIT_PRESETS.map((p) => ({ value: p.id, label: p.label })), { value: TYPED, label: "Typed ratio L/n" }]}
-          onChange={(e) => setLimitChoice(e.target.value)}
-        />
-        {limitChoice === TYPED && <TextField label="n in L/n" name="deflection-ratio" inputMode="decimal" value={ratioText} onChange={(e) => setRatioText(e.target.value)} />}
       </div>
-      <div className="grid gap-3 md:grid-cols-2">
-        <IdChecklist legend={isIShape ? `Strength checks (${method} combinations)` : "Stress checks for"} ids={[...combos, ...cases]} selected={strengthIds} onChange={setStrengthIds} />
-        <IdChecklist legend="Deflection checks for" ids={[...cases, ...combos]} selected={deflectionIds} onChange={setDeflectionIds} />
-      </div>
+      <IdChecklist legend={isIShape ? `Strength checks (${method} combinations)` : "Stress checks for"} ids={[...combos, ...cases]} selected={strengthIds} onChange={setStrengthIds} />
+      <DeflectionRules rules={rules} ids={[...cases, ...combos]} onChange={setRules} />
       {combos.length === 0 && <Alert tone="caution" title="No combinations">Strength checks need factored combinations: generate them from a code preset first.</Alert>}
       {mismatched && (
         <Alert tone="caution" title="Section and analysis differ">

@@ -27,8 +27,8 @@ export interface BeamCheckRequest {
   /** Maximum unbraced length of the compression flange, m; null = braced at the supports only. */
   readonly Lb: number | null;
   readonly strengthIds: readonly string[];
-  readonly deflectionIds: readonly string[];
-  readonly deflectionLimit: DeflectionLimit;
+  /** Each case or combination checked for deflection, with its limit (one id may appear under several limits). */
+  readonly deflection: readonly { readonly id: string; readonly limit: DeflectionLimit }[];
   /** User allowables for the elastic checks of sections other than I-shapes, Pa. */
   readonly allowableBending: number | null;
   readonly allowableShear: number | null;
@@ -55,10 +55,10 @@ function elasticRows(req: BeamCheckRequest, spans: readonly DesignSpan[], result
       if (req.allowableShear !== null && p.Q !== null && p.bNA !== null)
         rows.push({ ...at, check: checkShearStress({ V: peak(inSpan.map((s) => s.V)), Q: p.Q, I: p.I, b: p.bNA, allowable: req.allowableShear }) });
     }
-    for (const id of req.deflectionIds) {
+    for (const { id, limit } of req.deflection) {
       const supportAt = span.kind === "cantilever" ? (span.supportAt ?? "left") : "both";
       const deflection = spanDeflection(stationsFromResult(result, id), span.x1, span.x2, supportAt);
-      const check = checkDeflection({ length: span.x2 - span.x1, spanKind: span.kind, deflection, limit: req.deflectionLimit, caseLabel: id });
+      const check = checkDeflection({ length: span.x2 - span.x1, spanKind: span.kind, deflection, limit, caseLabel: id });
       rows.push({ span: span.label, caseId: id, x1: span.x1, x2: span.x2, check });
     }
   }
@@ -75,7 +75,7 @@ export function computeBeamChecks(req: BeamCheckRequest): BeamCheckOutcome {
   if (spans.length === 0) return { ok: false, message: "The beam has no spans to check." };
   const braces = bracePointsEvery(spans, req.Lb);
   const xs = checkStations([...new Set(spans.flatMap((s) => [s.x1, s.x2]))], braces);
-  const ids = [...new Set([...req.strengthIds, ...req.deflectionIds])];
+  const ids = [...new Set([...req.strengthIds, ...req.deflection.map((d) => d.id)])];
   let result = req.result;
   let resolved = false;
   if (!resultCovers(result, ids, xs)) {
@@ -99,7 +99,7 @@ export function computeBeamChecks(req: BeamCheckRequest): BeamCheckOutcome {
       spans,
       bracePoints: braces,
       strength: req.strengthIds.map((id) => ({ id, stations: stationsFromResult(result, id) })),
-      deflection: req.deflectionIds.map((id) => ({ id, stations: stationsFromResult(result, id), limit: req.deflectionLimit })),
+      deflection: req.deflection.map(({ id, limit }) => ({ id, stations: stationsFromResult(result, id), limit })),
     });
     return { ok: true, rows, resolved, notes };
   }
