@@ -33,6 +33,7 @@ export const uiTimeoutMs = 20_000;
 export const flowTimeoutMs = 120_000;
 
 export interface SeededUser {
+  userId: string;
   name: string;
   email: string;
   password: string;
@@ -117,7 +118,7 @@ export async function startE2e(prefix: string): Promise<E2eEnvironment> {
       },
       async signUp(name, email) {
         const user = await app.signUp(name, email);
-        return { name, email: user.email, password: user.password, client: user.client };
+        return { userId: user.userId, name, email: user.email, password: user.password, client: user.client };
       },
       async screenshot(page, name) {
         await page.screenshot({ path: path.join(screenshotDir, `${prefix}-${name}.png`), fullPage: true });
