@@ -1,7 +1,9 @@
 import { describe, expect, it } from "vitest";
 import { fireEvent, render, screen, within } from "@testing-library/react";
 import { MATERIAL_PRESETS, propertiesOfValidShape, type IShape } from "@spanwright/solver/design";
+import { solve } from "@spanwright/solver";
 import { ChecksPanel } from "./ChecksPanel";
+import { stationsForChecks } from "./computeBeamChecks";
 import type { DesignModel } from "./designModel";
 
 // Plates of a W410×46-like rolled shape (approximate, from memory); the test's numbers are hand
@@ -41,7 +43,7 @@ function cells(row: HTMLElement): string[] {
 
 describe("ChecksPanel", () => {
   it("lists flexure, shear and deflection per span with demand, capacity and utilisation", () => {
-    render(<ChecksPanel model={model} units="si" shape={shape} material={steel} />);
+    render(<ChecksPanel model={model} units="si" shape={shape} material={steel} solveModel={solve} />);
     const table = screen.getByRole("table", { name: "Member checks" });
     const rows = within(table).getAllByRole("row").slice(1);
     expect(rows).toHaveLength(3);
@@ -72,7 +74,7 @@ describe("ChecksPanel", () => {
   });
 
   it("splits the span into unbraced segments when Lb is typed", () => {
-    render(<ChecksPanel model={model} units="si" shape={shape} material={steel} />);
+    render(<ChecksPanel model={model} units="si" shape={shape} material={steel} solveModel={solve} />);
     fireEvent.change(screen.getByLabelText("Unbraced length Lb (m)"), { target: { value: "2" } });
     const table = screen.getByRole("table", { name: "Member checks" });
     // Three 2 m segments of flexure, one shear and one deflection row.
@@ -81,7 +83,7 @@ describe("ChecksPanel", () => {
   });
 
   it("checks a second deflection limit, L/240 dead + live, for the cases ticked under it", () => {
-    render(<ChecksPanel model={model} units="si" shape={shape} material={steel} />);
+    render(<ChecksPanel model={model} units="si" shape={shape} material={steel} solveModel={solve} />);
     const total = screen.getAllByRole("group", { name: "Applies to" })[1]!;
     fireEvent.click(within(total).getByLabelText("LRFD2"));
     const table = screen.getByRole("table", { name: "Member checks" });
@@ -90,5 +92,14 @@ describe("ChecksPanel", () => {
     // IBC 2021 Table 1604.3 floor members, D + L: L/240 = 6000/240 = 25 mm.
     expect(cells(rows[1]!)).toContain("25 mm");
     expect(cells(rows[1]!).join(" ")).toMatch(/δ ≤ L\/240/);
+  });
+
+  it("uses a result that already has the check stations, and asks for them when it has not and no solver is given", () => {
+    const { unmount } = render(<ChecksPanel model={model} units="si" shape={shape} material={steel} />);
+    expect(screen.getByText(/lacks the stations the checks need/)).toBeTruthy();
+    unmount();
+    const result = solve({ ...model, stations: stationsForChecks(model, null) });
+    render(<ChecksPanel model={model} result={result} units="si" shape={shape} material={steel} />);
+    expect(within(screen.getByRole("table", { name: "Member checks" })).getByText("162 kN·m")).toBeTruthy();
   });
 });

@@ -30,6 +30,11 @@ export interface ChecksPanelProps {
   /** Section and material to check (from SectionEditor and MaterialPicker), SI. */
   readonly shape: SectionShape;
   readonly material: Material;
+  /**
+   * The engine's `solve` (or any function returning an exchange-format result), used when `result`
+   * lacks the check stations. Optional so the panel itself never imports the engine.
+   */
+  readonly solveModel?: (model: unknown) => ResultLike;
 }
 
 function liveCaseIds(model: DesignModel): string[] {
@@ -43,7 +48,7 @@ function parsePositive(text: string, units: UnitSystemId, quantity: "length" | "
 }
 
 /** Member checks per span for the given section and material, with their inputs, formulas and clauses. */
-export function ChecksPanel({ model, result = null, units, shape, material }: ChecksPanelProps) {
+export function ChecksPanel({ model, result = null, units, shape, material, solveModel }: ChecksPanelProps) {
   const combos = combinationIds(model);
   const cases = caseIds(model);
   const [method, setMethod] = useState<DesignMethod>("LRFD");
@@ -58,17 +63,17 @@ export function ChecksPanel({ model, result = null, units, shape, material }: Ch
   const isIShape = shape.kind === "i-shape";
 
   const outcome = useMemo(() => {
-    if (!validShape.ok) return { ok: false as const, message: `Section: ${validShape.error.message}` };
+    if (!validShape.ok) return { ok: false as const, code: "invalid-input" as const, message: `Section: ${validShape.error.message}` };
     const deflection = rules.flatMap((r) => {
       const limit = limitOfRule(r);
       return limit ? r.ids.map((id) => ({ id, limit })) : [];
     });
     return computeBeamChecks({
-      model, result, shape: validShape.value, material, method, Lb, strengthIds, deflection,
+      model, result, shape: validShape.value, material, method, Lb, strengthIds, deflection, ...(solveModel ? { solveModel } : {}),
       allowableBending: parsePositive(allowBendingText, units, "stress"),
       allowableShear: parsePositive(allowShearText, units, "stress"),
     });
-  }, [model, result, validShape, material, method, Lb, strengthIds, rules, allowBendingText, allowShearText, units]);
+  }, [model, result, validShape, material, method, Lb, strengthIds, rules, allowBendingText, allowShearText, units, solveModel]);
 
   const sectionI = validShape.ok ? propertiesOfValidShape(validShape.value).I : null;
   const mismatched = sectionI !== null && model.segments.some((s) => Math.abs(s.I - sectionI) > 0.02 * sectionI);

@@ -1,6 +1,6 @@
 import { useMemo, useState } from "react";
 import { Link, useParams } from "react-router";
-import { beamModelSchema, type BeamModel } from "@spanwright/solver";
+import { beamModelSchema, solve, type BeamModel } from "@spanwright/solver";
 import {
   findMaterialPreset,
   MATERIAL_PRESETS,
@@ -87,7 +87,7 @@ function DesignWorkspace({ model, result, units }: { model: BeamModel; result: R
         )}
       </Card>
       <Card title="Member checks">
-        <ChecksPanel key={added.map((c) => c.id).join(",")} model={designModel} result={added.length > 0 ? null : result} units={units} shape={shape} material={material} />
+        <ChecksPanel key={added.map((c) => c.id).join(",")} model={designModel} result={added.length > 0 ? null : result} units={units} shape={shape} material={material} solveModel={solve} />
       </Card>
       <Card title="Section at x">
         <SectionAtX model={designModel} shape={shape} material={material} units={units} />

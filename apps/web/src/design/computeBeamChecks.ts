@@ -1,4 +1,3 @@
-import { solve, SolverError } from "@spanwright/solver";
 import {
   checkBendingStress,
   checkDeflection,
@@ -29,6 +28,12 @@ export interface BeamCheckRequest {
   readonly strengthIds: readonly string[];
   /** Each case or combination checked for deflection, with its limit (one id may appear under several limits). */
   readonly deflection: readonly { readonly id: string; readonly limit: DeflectionLimit }[];
+  /**
+   * Solves the model (with `stations`) when `result` lacks stations the checks need, e.g. the
+   * engine's `solve`. Injected so that mounting the checks does not pull the engine into a chunk;
+   * without it a result lacking stations gives the `missing-stations` outcome.
+   */
+  readonly solveModel?: (model: unknown) => ResultLike;
   /** User allowables for the elastic checks of sections other than I-shapes, Pa. */
   readonly allowableBending: number | null;
   readonly allowableShear: number | null;
@@ -36,7 +41,9 @@ export interface BeamCheckRequest {
 
 export type BeamCheckOutcome =
   | { readonly ok: true; readonly rows: readonly SpanCheckRow[]; readonly resolved: boolean; readonly notes: readonly string[] }
-  | { readonly ok: false; readonly message: string };
+  | { readonly ok: false; readonly code: "invalid-input" | "solve-failed"; readonly message: string }
+  /** The result lacks stations and no solver was given: solve again with `stations`. */
+  | { readonly ok: false; readonly code: "missing-stations"; readonly message: string; readonly stations: readonly number[] };
 
 function peak(values: readonly number[]): number {
   return values.reduce((m, v) => (Math.abs(v) > Math.abs(m) ? v : m), 0);
@@ -70,27 +77,35 @@ function elasticRows(req: BeamCheckRequest, spans: readonly DesignSpan[], result
  * user allowables otherwise, and deflection limits. Solves the model again when the given result
  * lacks the stations the checks need (span ends, braces, quarter points); `solve` is pure and fast.
  */
+/** x positions (m) at which the checks need results: span ends, brace points and quarter points. */
+export function stationsForChecks(model: DesignModel, Lb: number | null): number[] {
+  const spans = designSpans(model);
+  return checkStations([...new Set(spans.flatMap((s) => [s.x1, s.x2]))], bracePointsEvery(spans, Lb));
+}
+
 export function computeBeamChecks(req: BeamCheckRequest): BeamCheckOutcome {
   const spans = designSpans(req.model);
-  if (spans.length === 0) return { ok: false, message: "The beam has no spans to check." };
+  if (spans.length === 0) return { ok: false, code: "invalid-input", message: "The beam has no spans to check." };
   const braces = bracePointsEvery(spans, req.Lb);
-  const xs = checkStations([...new Set(spans.flatMap((s) => [s.x1, s.x2]))], braces);
+  const xs = stationsForChecks(req.model, req.Lb);
   const ids = [...new Set([...req.strengthIds, ...req.deflection.map((d) => d.id)])];
   let result = req.result;
   let resolved = false;
   if (!resultCovers(result, ids, xs)) {
+    if (!req.solveModel)
+      return { ok: false, code: "missing-stations", message: "The result lacks the stations the checks need: solve the beam again with them.", stations: xs };
     try {
-      result = solve({ ...req.model, stations: xs });
+      result = req.solveModel({ ...req.model, stations: xs });
       resolved = true;
     } catch (error) {
-      if (error instanceof SolverError) return { ok: false, message: `The beam could not be solved for the checks: ${error.message}` };
-      throw error;
+      // The engine throws a SolverError (code, message) for models it cannot solve.
+      return { ok: false, code: "solve-failed", message: `The beam could not be solved for the checks: ${error instanceof Error ? error.message : String(error)}` };
     }
   }
-  if (!result) return { ok: false, message: "No result to check." };
+  if (!result) return { ok: false, code: "invalid-input", message: "No result to check." };
   const notes: string[] = [];
   if (req.shape.kind === "i-shape") {
-    if (req.material.Fy === undefined) return { ok: false, message: "The AISC checks need the yield stress Fy of the material." };
+    if (req.material.Fy === undefined) return { ok: false, code: "invalid-input", message: "The AISC checks need the yield stress Fy of the material." };
     const rows = steelBeamChecks({
       shape: req.shape,
       Fy: req.material.Fy,
