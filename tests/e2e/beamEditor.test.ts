@@ -50,7 +50,7 @@ afterAll(async () => {
 
 describe("the beam editor in a real browser", () => {
   it(
-    "shows a viewer the project and the beam without any way to add beams or save revisions",
+    "shows a viewer the project, the revision and the beam without any way to add beams, issue or save revisions",
     async () => {
       const beamName = "Viewer beam B4";
       const beamId = await createBeamThroughApi(beamName);
@@ -64,7 +64,15 @@ describe("the beam editor in a real browser", () => {
       expect(await page.getByRole("form", { name: "New beam" }).count()).toBe(0);
       expect(await page.getByRole("button", { name: "Delete" }).count()).toBe(0);
 
-      await page.getByRole("link", { name: beamName, exact: true }).click();
+      // The saved revision, read-only: reactions to read, nothing to issue or upload.
+      await page.getByRole("link", { name: `Revisions of ${beamName}, latest r1` }).click();
+      await page.getByRole("link", { name: "Open r1 read-only" }).click();
+      await page.getByRole("heading", { name: `${beamName}, r1` }).waitFor();
+      await page.getByRole("table", { name: "Support reactions of r1" }).waitFor();
+      expect(await page.getByRole("button", { name: /^Issue/ }).count()).toBe(0);
+      await env.screenshot(page, "viewer-revision");
+
+      await page.getByRole("link", { name: "Open in editor" }).click();
       await waitForEditor(page, beamName);
       await page.getByText("Read only: your role cannot save revisions.").waitFor();
       expect(await saveButtonOf(page).isDisabled()).toBe(true);
