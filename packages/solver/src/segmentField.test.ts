@@ -67,7 +67,6 @@ describe("solveStartForces", () => {
     { name: "Euler-Bernoulli", shearStiffness: undefined },
     { name: "Timoshenko", shearStiffness: 2e8 },
   ])("gives the element end forces K·u for end displacements without span loads ($name)", ({ shearStiffness }) => {
-    const grid = oneSegment(L);
     const section = { EI, shearFlexibility: shearStiffness ? 1 / shearStiffness : 0 };
     const u = [0.002, -0.001, -0.004, 0.0005];
     const K = elementStiffness(shearStiffness ? { length: L, EI, shearStiffness } : { length: L, EI });
