@@ -16,20 +16,19 @@ function toState(response: SolveResponse): AnalysisState {
   return response.ok ? { status: "ready", analysis: response.analysis, error: null } : { status: "failed", analysis: null, error: response.error };
 }
 
-/** The solver-relevant part of the document; title and display units do not change results. */
-function solverInput(doc: BeamDocument) {
-  return { nodes: doc.nodes, segments: doc.segments, loadCases: doc.loadCases, combinations: doc.combinations, theory: doc.theory, stations: doc.stations };
-}
-
 /**
  * Solves the document on every change in a Web Worker (the newest request wins; stale answers are
  * dropped). There is deliberately no main-thread fallback: it would pull the whole engine (and its
  * matrix library) into the editor chunk, which only needs the engine's result readers.
  */
 export function useAnalysis(doc: BeamDocument): AnalysisState {
-  const input = solverInput(doc);
-  // Re-solve only when a solver-relevant field changed (arrays are replaced on every edit).
-  const model = useMemo(() => toExchange(doc), [input.nodes, input.segments, input.loadCases, input.combinations, input.theory, input.stations]); // eslint-disable-line react-hooks/exhaustive-deps
+  // Re-solve only when a field the engine reads changed (edits replace those arrays); the title
+  // and display units do not change results, so renaming or switching units does not re-solve.
+  const { nodes, segments, loadCases, combinations, theory, stations } = doc;
+  const model = useMemo(
+    () => toExchange({ title: "", units: "si", nodes, segments, loadCases, combinations, theory, stations }),
+    [nodes, segments, loadCases, combinations, theory, stations],
+  );
   const [state, setState] = useState<AnalysisState>(solving);
   const seq = useRef(0);
 
