@@ -24,14 +24,17 @@ import { useBeamParams } from "./useBeamParams";
 export function RevisionPage() {
   const { projectId, beamId } = useBeamParams();
   const version = Number(useParams().version);
-  const valid = Number.isInteger(version) && version > 0;
+  if (!Number.isInteger(version) || version <= 0) return <NotFoundPage />;
+  return <RevisionView projectId={projectId} beamId={beamId} version={version} />;
+}
+
+function RevisionView({ projectId, beamId, version }: { projectId: string; beamId: string; version: number }) {
   const project = useProject(projectId);
   const beam = useBeam(projectId, beamId);
-  const revision = useRevision(projectId, beamId, valid ? version : 1);
-  const reactions = useReactions(projectId, beamId, valid ? version : 1);
+  const revision = useRevision(projectId, beamId, version);
+  const reactions = useReactions(projectId, beamId, version);
   const [issuing, setIssuing] = useState(false);
 
-  if (!valid) return <NotFoundPage />;
   if (project.isPending || beam.isPending || revision.isPending) return <Loading label="Loading revision…" />;
   const failed = project.error ?? beam.error ?? revision.error;
   if (failed !== null) {
