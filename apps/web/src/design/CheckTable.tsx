@@ -10,9 +10,9 @@ function formatValue(value: number | string, unit: string, symbol: string, units
 
 function InputList({ inputs, units }: { inputs: readonly CheckInput[]; units: UnitSystemId }) {
   return (
-    <ul className="space-y-0.5">
+    <ul className="grid grid-cols-2 gap-x-4 gap-y-0.5">
       {inputs.map((i) => (
-        <li key={i.symbol} title={i.description}>
+        <li key={i.symbol} title={i.description} className="whitespace-nowrap">
           <span className="font-mono">{i.symbol}</span> = {formatValue(i.value, i.unit, i.symbol, units)}
         </li>
       ))}
@@ -32,7 +32,7 @@ const statusLabels = { pass: "Pass", fail: "Fail", "not-covered": "Not covered" 
 export function CheckTable({ rows, units }: { rows: readonly SpanCheckRow[]; units: UnitSystemId }) {
   return (
     <div className="overflow-x-auto">
-      <table className="w-full min-w-[60rem] text-sm" aria-label="Member checks">
+      <table className="w-full min-w-[64rem] text-sm" aria-label="Member checks">
         <thead>
           <tr className="border-b border-paper-300 text-left text-xs uppercase tracking-wide text-paper-600">
             <th className="py-1 pr-3">Span</th>
@@ -60,7 +60,7 @@ export function CheckTable({ rows, units }: { rows: readonly SpanCheckRow[]; uni
                 </td>
                 <td className="py-2 pr-3 font-mono">{r.caseId}</td>
                 <td className="py-2 pr-3">{c.title}</td>
-                <td className="py-2 pr-3 text-xs text-paper-700">
+                <td className="min-w-[16rem] py-2 pr-3 text-xs text-paper-700">
                   <InputList inputs={c.inputs} units={units} />
                 </td>
                 <td className="py-2 pr-3 font-mono text-xs">{c.formula}</td>
@@ -78,8 +78,8 @@ export function CheckTable({ rows, units }: { rows: readonly SpanCheckRow[]; uni
                   </td>
                 ) : (
                   <>
-                    <td className="py-2 pr-3 text-right font-mono tabular-nums">{formatValue(c.demand, c.unit, "", units)}</td>
-                    <td className="py-2 pr-3 text-right font-mono tabular-nums">{formatValue(c.capacity, c.unit, "", units)}</td>
+                    <td className="py-2 pr-3 text-right font-mono tabular-nums whitespace-nowrap">{formatValue(c.demand, c.unit, "", units)}</td>
+                    <td className="py-2 pr-3 text-right font-mono tabular-nums whitespace-nowrap">{formatValue(c.capacity, c.unit, "", units)}</td>
                     <td className="py-2 pr-3 text-right font-mono tabular-nums" data-utilisation={c.utilisation}>
                       {formatNumber(c.utilisation, 3)}
                     </td>
