@@ -1,6 +1,8 @@
-import type { Express } from "express";
+import type { TestApp } from "@spanwright/api/testing";
 import type { AddressInfo } from "node:net";
 import type { Server } from "node:http";
+
+type Express = TestApp["app"];
 
 /** The Origin the test config allows (see `testConfig`), sent like a browser would. */
 const testOrigin = "http://spanwright.test";

@@ -93,7 +93,8 @@ async function run(name: string, options: autocannon.Options, expectedStatus: nu
   const latencies: number[] = [];
   let wrongStatus = 0;
   const cpuBefore = serverCpuMs();
-  const instance = autocannon({ ...options, duration, connections, pipelining: 1 });
+  // without a callback autocannon returns its instance, which is also a promise of the result
+  const instance = autocannon({ ...options, duration, connections, pipelining: 1 }) as unknown as autocannon.Instance & PromiseLike<autocannon.Result>;
   instance.on("response", (_client: unknown, statusCode: number, _bytes: number, responseTime: number) => {
     latencies.push(responseTime);
     if (statusCode !== expectedStatus) wrongStatus++;
