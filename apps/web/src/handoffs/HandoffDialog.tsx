@@ -46,11 +46,17 @@ export function HandoffDialog({
   const closeRef = useRef(onClose);
   closeRef.current = onClose;
   useEffect(() => {
+    // Focus goes back where it was (the "Issue" button) when the dialog closes.
+    const opener = document.activeElement instanceof HTMLElement ? document.activeElement : null;
     const onKey = (e: KeyboardEvent) => {
       if (e.key === "Escape") closeRef.current();
+      if (e.key === "Tab") trapTab(e, panel.current);
     };
     window.addEventListener("keydown", onKey);
-    return () => window.removeEventListener("keydown", onKey);
+    return () => {
+      window.removeEventListener("keydown", onKey);
+      opener?.focus();
+    };
   }, []);
 
   const ready = draft !== null;
@@ -155,6 +161,24 @@ export function HandoffDialog({
       </div>
     </div>
   );
+}
+
+/** Keeps Tab and Shift+Tab inside the modal panel, wrapping at either end. */
+function trapTab(e: KeyboardEvent, container: HTMLElement | null): void {
+  if (container === null) return;
+  const focusable = [...container.querySelectorAll<HTMLElement>("input, textarea, button, select, a[href]")].filter(
+    (el) => !el.hasAttribute("disabled"),
+  );
+  const first = focusable[0];
+  const last = focusable[focusable.length - 1];
+  if (first === undefined || last === undefined) return;
+  if (e.shiftKey && document.activeElement === first) {
+    e.preventDefault();
+    last.focus();
+  } else if (!e.shiftKey && document.activeElement === last) {
+    e.preventDefault();
+    first.focus();
+  }
 }
 
 function TextArea({ label, hint, value, rows, error, onChange }: {
