@@ -26,17 +26,16 @@ export function segmentSections(model: BeamModel): SegmentSection[] {
 export function assembleStiffness(model: BeamModel, dofs: DofMap, sections: readonly SegmentSection[]): AssembledSystem {
   const stiffness = createBandedMatrix(dofs.count, dofs.halfBandwidth);
   const elements = new Float64Array(16 * sections.length);
-  // Equal segments (the usual case) share one element matrix.
-  const cache = new Map<string, number[][]>();
+  // A run of equal segments (the usual case) shares one element matrix.
+  let k: number[][] = [];
+  let previous = { length: NaN, EI: NaN, shearFlexibility: NaN };
   for (let e = 0; e < sections.length; e++) {
     const section = sections[e]!;
     const length = model.nodes[e + 1]!.x - model.nodes[e]!.x;
-    const key = `${length}|${section.EI}|${section.shearFlexibility}`;
-    let k = cache.get(key);
-    if (!k) {
+    if (length !== previous.length || section.EI !== previous.EI || section.shearFlexibility !== previous.shearFlexibility) {
       const shearStiffness = section.shearFlexibility > 0 ? 1 / section.shearFlexibility : undefined;
       k = elementStiffness(shearStiffness === undefined ? { length, EI: section.EI } : { length, EI: section.EI, shearStiffness }).to2DArray();
-      cache.set(key, k);
+      previous = { length, EI: section.EI, shearFlexibility: section.shearFlexibility };
     }
     const map = elementDofs(dofs, e);
     for (let a = 0; a < 4; a++) {

@@ -31,13 +31,15 @@ function index(m: BandedSymmetricMatrix, i: number, j: number): number {
 
 /** Adds v to entries (i, j) and (j, i); |i − j| must be within the band. */
 export function addToBanded(m: BandedSymmetricMatrix, i: number, j: number, v: number): void {
-  const [r, c] = i >= j ? [i, j] : [j, i];
+  const r = i >= j ? i : j;
+  const c = i >= j ? j : i;
   if (r - c > m.halfBandwidth) throw new RangeError(`entry (${i}, ${j}) lies outside the band ${m.halfBandwidth}`);
   m.values[index(m, r, c)]! += v;
 }
 
 export function getBanded(m: BandedSymmetricMatrix, i: number, j: number): number {
-  const [r, c] = i >= j ? [i, j] : [j, i];
+  const r = i >= j ? i : j;
+  const c = i >= j ? j : i;
   return r - c > m.halfBandwidth ? 0 : m.values[index(m, r, c)]!;
 }
 
