@@ -1,3 +1,4 @@
+import { useState } from "react";
 import { describe, expect, it } from "vitest";
 import { screen } from "@testing-library/react";
 import type { Handoff } from "@spanwright/contracts";
@@ -31,5 +32,47 @@ describe("StaleHandoffBanner", () => {
     const current = { ...stale, recipients: [{ ...stale.recipients[0]!, outdated: false }] };
     const { container } = renderWithProviders(<StaleHandoffBanner handoffs={[current]} canIssue />);
     expect(container.textContent).toBe("");
+  });
+});
+
+describe("StaleHandoffBanner re-issue", () => {
+  it("keeps the dialog's confirmation after the re-issue clears the alert", async () => {
+    const { vi } = await import("vitest");
+    const { fireEvent } = await import("@testing-library/react");
+    const { stubFetch } = await import("../test/renderWithProviders");
+    const viewer = "6f1c2d3e-4a5b-4c6d-8e7f-8091a2b3c4d5";
+    const member = { userId: viewer, email: "ines@groundworks-demo.example", name: "Ines Varga", role: "viewer", pending: false, addedAt: "2026-11-02T09:00:00.000Z" };
+    const held: Handoff = { ...stale, recipients: [{ email: member.email, userId: viewer, name: "Ines Varga", outdated: true }] };
+    const reissued: Handoff = { ...held, id: "h2", version: 6, messageId: "<h2@local>", stale: false, staleValueCount: 0, recipients: [{ ...held.recipients[0]!, outdated: false }] };
+    vi.stubGlobal(
+      "fetch",
+      stubFetch({
+        "GET /api/projects/p1/members": { status: 200, body: { members: [member] } },
+        "POST /api/projects/p1/beams/b1/revisions/6/handoffs": { status: 201, body: { handoff: reissued } },
+      }),
+    );
+    const after = [reissued, { ...held, recipients: [{ ...held.recipients[0]!, outdated: false }] }];
+    // Stands in for the page: the hand-off list it passes changes when the query refetches.
+    function Page() {
+      const [list, setList] = useState<Handoff[]>([held]);
+      return (
+        <>
+          <button type="button" onClick={() => setList(after)}>refetch</button>
+          <StaleHandoffBanner handoffs={list} canIssue />
+        </>
+      );
+    }
+    renderWithProviders(<Page />);
+    fireEvent.click(screen.getByRole("button", { name: "Re-issue r6" }));
+    // The earlier recipient is ticked already.
+    const box = (await screen.findByRole("checkbox", { name: /Ines Varga/ })) as HTMLInputElement;
+    expect(box.checked).toBe(true);
+    fireEvent.click(screen.getByRole("button", { name: "Send hand-off" }));
+    await screen.findByText("Sent r6 to Ines Varga.");
+    // The refetched list no longer has anyone outdated: the banner goes, the confirmation stays.
+    fireEvent.click(screen.getByRole("button", { name: "refetch" }));
+    expect(screen.queryByText("The foundation designer holds outdated reactions")).toBeNull();
+    expect(screen.getByText("Sent r6 to Ines Varga.")).toBeTruthy();
+    vi.unstubAllGlobals();
   });
 });
