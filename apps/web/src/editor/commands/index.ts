@@ -5,3 +5,4 @@ export * from "./loadCommands";
 export * from "./caseCommands";
 export * from "./documentCommands";
 export * from "./history";
+export * from "./designCommands";

@@ -16,7 +16,9 @@ export function editSegment(doc: BeamDocument, args: { segmentId: SegmentId; pro
       return refused("invalid-value", `${key} must be a number above zero.`);
     }
   }
-  const next: Record<string, unknown> = { ...segment, ...args.props };
+  // Typed stiffness no longer follows from the chosen shape and material, so the section goes.
+  const { section: _section, ...plain } = segment;
+  const next: Record<string, unknown> = { ...plain, ...args.props };
   for (const key of Object.keys(next)) if (next[key] === undefined) delete next[key];
   return changed(doc, "Edit section", {
     segments: doc.segments.map((s) => (s.id === segment.id ? (next as unknown as Segment) : s)),

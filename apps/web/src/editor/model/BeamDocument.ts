@@ -1,5 +1,6 @@
 import type { CaseId, CombinationId, LoadId, NodeId, SegmentId } from "./ids";
 import type { UnitSystemId } from "../units/unitSystems";
+import type { Material, SectionShape } from "@spanwright/solver/design";
 
 // The open beam as plain immutable data. Values are SI (N, m, Pa, m⁴, N/m, N·m, rad) exactly as in
 // the exchange format; only `units` (how to show them) is extra. Signs follow the contract: forces
@@ -24,6 +25,16 @@ export interface BeamNode {
   readonly hinge: boolean;
 }
 
+/**
+ * The shape and material a segment's stiffness was computed from. Editor-only: the exchange format
+ * carries just E, I, A, G and shearFactor (its schema is strict), so a section chosen here is not
+ * saved with the revision; typing E, I, A, G or κ by hand drops it, as it no longer applies.
+ */
+export interface SegmentSection {
+  readonly shape: SectionShape;
+  readonly material: Material;
+}
+
 /** Segment i joins nodes i and i+1; its id stays with it when nodes move. */
 export interface Segment {
   readonly id: SegmentId;
@@ -32,6 +43,7 @@ export interface Segment {
   readonly A?: number;
   readonly G?: number;
   readonly shearFactor?: number;
+  readonly section?: SegmentSection;
 }
 
 export type Load =

@@ -39,7 +39,14 @@ export function toExchange(doc: BeamDocument): ExchangeModel {
       ...(n.support ? { support: { ...n.support } } : {}),
       ...(n.hinge ? { hinge: true } : {}),
     })),
-    segments: doc.segments.map(({ id: _id, ...section }) => ({ ...section })),
+    // Only the stiffness crosses into the contract; the editor-only `section` stays behind.
+    segments: doc.segments.map(({ E, I, A, G, shearFactor }) => ({
+      E,
+      I,
+      ...(A !== undefined ? { A } : {}),
+      ...(G !== undefined ? { G } : {}),
+      ...(shearFactor !== undefined ? { shearFactor } : {}),
+    })),
     loadCases: doc.loadCases.map((c) => ({
       id: c.name,
       category: c.category,
