@@ -13,7 +13,7 @@ import {
   typeQuantity,
   waitForEditor,
 } from "./editorPage";
-import { expectStatus, flowTimeoutMs, signInThroughForm, startE2e, type E2eEnvironment, type SeededUser } from "./harness";
+import { expectStatus, flowTimeoutMs, signInThroughForm, uiTimeoutMs, startE2e, type E2eEnvironment, type SeededUser } from "./harness";
 
 // Issues 4 and 7, real-browser suite: the viewer's read-only view, a save conflict from two tabs,
 // and modelling a beam with mouse and keyboard, saved and found again after a reload.
@@ -55,7 +55,7 @@ describe("the beam editor in a real browser", () => {
       const beamName = "Viewer beam B4";
       const beamId = await createBeamThroughApi(beamName);
       const context = await env.newContext();
-      const page = await context.newPage();
+      const page = await env.newPage(context, "viewer");
       await signInThroughForm(page, viewer);
 
       await page.getByRole("link", { name: new RegExp(projectName) }).click();
@@ -98,9 +98,9 @@ describe("the beam editor in a real browser", () => {
       const beamName = "Conflict beam C2";
       const beamId = await createBeamThroughApi(beamName);
       const context = await env.newContext();
-      const first = await context.newPage();
+      const first = await env.newPage(context, "conflict-first");
       await signInThroughForm(first, lead, beamPath(projectId, beamId));
-      const second = await context.newPage();
+      const second = await env.newPage(context, "conflict-second");
       await second.goto(beamPath(projectId, beamId));
       await waitForEditor(first, beamName);
       await waitForEditor(second, beamName);
@@ -157,7 +157,7 @@ describe("the beam editor in a real browser", () => {
     async () => {
       const beamName = "Mezzanine beam M1";
       const context = await env.newContext();
-      const page = await context.newPage();
+      const page = await env.newPage(context, "modelling");
       await signInThroughForm(page, lead, `/projects/${projectId}`);
 
       // A new beam from a template, through the project page's form.
@@ -180,7 +180,7 @@ describe("the beam editor in a real browser", () => {
       expect(await bodyRowsOf(await openTableTab(page, "Nodes")).count()).toBe(3);
       await paletteButton(page, "Point load").click();
       await clickOnBeam(page, 0.7);
-      await expect.poll(() => momentExtremesOf(page).textContent(), { timeout: 20_000 }).not.toBe(initial);
+      await expect.poll(() => momentExtremesOf(page).textContent(), { timeout: uiTimeoutMs }).not.toBe(initial);
       expect(await bodyRowsOf(await openTableTab(page, "Loads")).count()).toBe(2);
 
       // Keyboard: another span by splitting segment 2, exact node positions, a second point load,
@@ -203,7 +203,7 @@ describe("the beam editor in a real browser", () => {
 
       // Statics of the 6 m simple span (common practice): R_A = 15 + 20·3/6 + 10·4.5/6 = 32.5 kN;
       // M(3 m) = 32.5·3 − 5·3²/2 − 10·1.5 = 60 kN·m, the maximum (shear changes sign at the 20 kN load).
-      await expect.poll(() => momentExtremesOf(page).textContent(), { timeout: 20_000 }).toContain("60 kN·m at 3 m");
+      await expect.poll(() => momentExtremesOf(page).textContent(), { timeout: uiTimeoutMs }).toContain("60 kN·m at 3 m");
       await saveStateOf(page).filter({ hasText: "r1 · unsaved changes" }).waitFor();
       await env.screenshot(page, "editor");
 
@@ -233,7 +233,7 @@ describe("the beam editor in a real browser", () => {
       const beamName = "Viewer beam B5";
       const beamId = await createBeamThroughApi(beamName);
       const context = await env.newContext();
-      const page = await context.newPage();
+      const page = await env.newPage(context, "viewer-disabled");
       await signInThroughForm(page, viewer, beamPath(projectId, beamId));
       await waitForEditor(page, beamName);
       const tools = page.getByRole("toolbar", { name: "Beam tools" });

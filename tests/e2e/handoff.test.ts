@@ -1,4 +1,4 @@
-import { afterAll, beforeAll, describe, expect, it, onTestFailed } from "vitest";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { twoSpanModel } from "@spanwright/api/testing";
 import { beamPath, openTableTab, saveButtonOf, saveStateOf, typeQuantity, waitForEditor } from "./editorPage";
 import { expectStatus, flowTimeoutMs, signInThroughForm, startE2e, type E2eEnvironment, type SeededUser } from "./harness";
@@ -48,8 +48,7 @@ describe("the hand-off in a real browser", () => {
     "re-issues a changed load's reactions after comparing with the issued revision, and the mail reaches the outbox",
     async () => {
       const context = await env.newContext();
-      const page = await context.newPage();
-      onTestFailed(() => env.screenshot(page, "failed-reissue"));
+      const page = await env.newPage(context, "reissue");
       await signInThroughForm(page, lead, beamPath(projectId, beamId));
       await waitForEditor(page, beamName);
 
@@ -122,7 +121,7 @@ describe("the hand-off in a real browser", () => {
         "save a heavier load",
       );
       const context = await env.newContext();
-      const page = await context.newPage();
+      const page = await env.newPage(context, "confirm");
       await signInThroughForm(page, lead, `/projects/${projectId}/beams/${beamId}/revisions`);
       const banner = page.getByRole("status").filter({ hasText: "The foundation designer holds outdated reactions" });
       await banner.getByRole("button", { name: `Re-issue r${version + 1}` }).click();

@@ -1,9 +1,11 @@
 import fs from "node:fs";
+import os from "node:os";
 import type { Server } from "node:http";
 import type { AddressInfo } from "node:net";
 import path from "node:path";
 import { fileURLToPath } from "node:url";
 import { chromium, type Browser, type BrowserContext, type Page } from "playwright-core";
+import { onTestFailed } from "vitest";
 import { createTestApp, type Client, type TestApp } from "@spanwright/api/testing";
 
 /*
@@ -29,8 +31,8 @@ const chromiumArgs = [
 ];
 
 /** Generous waits: the machine is small and shared, and the first editor paint loads Konva and the engine. */
-export const uiTimeoutMs = 20_000;
-export const flowTimeoutMs = 120_000;
+export const uiTimeoutMs = 30_000;
+export const flowTimeoutMs = 150_000;
 
 export interface SeededUser {
   userId: string;
@@ -47,6 +49,8 @@ export interface E2eEnvironment {
   browser: Browser;
   /** A fresh browser profile (cookies, local storage) with the app's origin as base URL. */
   newContext(): Promise<BrowserContext>;
+  /** A new page of `context`; when the running test fails, its last screen is saved as failed-<name>. */
+  newPage(context: BrowserContext, name: string): Promise<Page>;
   /** Signs up through the API (not the UI) and returns the credentials with a session client. */
   signUp(name: string, email?: string): Promise<SeededUser>;
   /** Saves a full-page PNG under test-results/screenshots/<file>-<name>.png. */
@@ -88,14 +92,19 @@ export async function startE2e(prefix: string): Promise<E2eEnvironment> {
   };
 
   try {
+    const webDist = snapshotWebDist(path.resolve(here, "../../apps/web/dist"));
+    stops.push(async () => fs.rmSync(webDist, { recursive: true, force: true }));
     const app = await createTestApp({
-      env: { NODE_ENV: "production", SERVE_WEB: "true", SMTP_MODE: "catcher", SMTP_PORT: "0", OUTBOX_ENABLED: "true" },
+      env: {
+        NODE_ENV: "production",
+        SERVE_WEB: "true",
+        WEB_DIST_DIR: webDist,
+        SMTP_MODE: "catcher",
+        SMTP_PORT: "0",
+        OUTBOX_ENABLED: "true",
+      },
     });
     stops.push(() => app.close());
-    const indexHtml = path.join(app.config.webDistDir, "index.html");
-    if (!fs.existsSync(indexHtml)) {
-      throw new Error(`the web app is not built (${indexHtml}); run: pnpm --filter @spanwright/web build`);
-    }
     const server = await listen(app);
     stops.push(() => closeServer(server));
     const baseUrl = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
@@ -116,6 +125,13 @@ export async function startE2e(prefix: string): Promise<E2eEnvironment> {
         context.setDefaultTimeout(uiTimeoutMs);
         return context;
       },
+      async newPage(context, name) {
+        const page = await context.newPage();
+        onTestFailed(async () => {
+          if (!page.isClosed()) await page.screenshot({ path: path.join(screenshotDir, `${prefix}-failed-${name}.png`), fullPage: true });
+        });
+        return page;
+      },
       async signUp(name, email) {
         const user = await app.signUp(name, email);
         return { userId: user.userId, name, email: user.email, password: user.password, client: user.client };
@@ -129,6 +145,33 @@ export async function startE2e(prefix: string): Promise<E2eEnvironment> {
     await stopAll().catch(() => {});
     throw error;
   }
+}
+
+/**
+ * A private copy of the built web app (without source maps). Others rebuild apps/web/dist while
+ * tests run; a page loaded before a rebuild would then ask for chunks that no longer exist.
+ */
+function snapshotWebDist(distDir: string): string {
+  const indexHtml = path.join(distDir, "index.html");
+  if (!fs.existsSync(indexHtml)) {
+    throw new Error(`the web app is not built (${indexHtml}); run: pnpm --filter @spanwright/web build`);
+  }
+  for (let attempt = 1; ; attempt++) {
+    const copy = fs.mkdtempSync(path.join(os.tmpdir(), "spanwright-e2e-web-"));
+    fs.cpSync(distDir, copy, { recursive: true, filter: (source) => !source.endsWith(".map") });
+    if (referencedAssetsExist(copy)) return copy;
+    fs.rmSync(copy, { recursive: true, force: true });
+    if (attempt === 3) throw new Error(`${distDir} keeps changing (a build is running?); run the tests again when it is done`);
+  }
+}
+
+/** Whether every script and stylesheet index.html names is in the copy (false: copied mid-build). */
+function referencedAssetsExist(dir: string): boolean {
+  const indexHtml = path.join(dir, "index.html");
+  if (!fs.existsSync(indexHtml)) return false;
+  const html = fs.readFileSync(indexHtml, "utf8");
+  const assets = [...html.matchAll(/(?:src|href)="\/([^"]+\.(?:js|css))"/g)].map((m) => m[1]!);
+  return assets.every((asset) => fs.existsSync(path.join(dir, asset)));
 }
 
 /** Signs in through the sign-in form and waits for the projects page (or the `next` page). */

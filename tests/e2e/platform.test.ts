@@ -21,7 +21,7 @@ describe("the platform in a real browser", () => {
       const projectName = "Tannery Row footbridge";
 
       const leadContext = await env.newContext();
-      const page = await leadContext.newPage();
+      const page = await env.newPage(leadContext, "lead");
 
       // A signed-out visitor is sent to sign-in, and can go on to create an account there.
       await page.goto("/projects");
@@ -83,7 +83,7 @@ describe("the platform in a real browser", () => {
 
       // The invitee, in a browser of their own, signs up with the invited e-mail and finds the project.
       const inviteeContext = await env.newContext();
-      const p2 = await inviteeContext.newPage();
+      const p2 = await env.newPage(inviteeContext, "invitee");
       await p2.goto("/sign-up");
       await p2.getByLabel("Full name").fill(invitee.name);
       await p2.getByLabel("E-mail").fill(invitee.email);
