@@ -45,7 +45,7 @@ afterAll(async () => {
 
 describe("the hand-off in a real browser", () => {
   it(
-    "re-issues a changed load's reactions after comparing with the issued revision, and the mail reaches the outbox",
+    "re-issues a changed load's reactions after comparing with the issued revision; the mail reaches the outbox and its link opens r2 for the designer",
     async () => {
       const context = await env.newContext();
       const page = await env.newPage(context, "reissue");
@@ -100,6 +100,17 @@ describe("the hand-off in a real browser", () => {
       await message.getByText(/\.csv · text\/csv/).waitFor();
       await message.getByText(/\.pdf · application\/pdf/).waitFor();
       await env.screenshot(page, "outbox");
+      const link = /Open the revision: (\S+)/.exec((await message.textContent()) ?? "")?.[1];
+      expect(link).toBe(`${env.baseUrl}/projects/${projectId}/beams/${beamId}/revisions/2`);
+
+      // The designer follows the mail's link, signs in, and reads r2 read-only.
+      const designerContext = await env.newContext();
+      const designerPage = await env.newPage(designerContext, "designer");
+      await signInThroughForm(designerPage, designer, new URL(link!).pathname);
+      await designerPage.getByRole("heading", { name: `${beamName}, r2` }).waitFor();
+      await designerPage.getByRole("table", { name: "Support reactions of r2" }).waitFor();
+      expect(await designerPage.getByRole("button", { name: /^Issue/ }).count()).toBe(0);
+      await designerContext.close();
 
       const handoffs = expectStatus(await lead.client.get(`/api/projects/${projectId}/beams/${beamId}/handoffs`), 200, "hand-offs");
       expect(handoffs.body.handoffs.map((h: { version: number }) => h.version)).toEqual([2, 1]);

@@ -1,7 +1,7 @@
 import fs from "node:fs";
 import os from "node:os";
 import type { Server } from "node:http";
-import type { AddressInfo } from "node:net";
+import net, { type AddressInfo } from "node:net";
 import path from "node:path";
 import { fileURLToPath } from "node:url";
 import { chromium, type Browser, type BrowserContext, type Page } from "playwright-core";
@@ -58,9 +58,21 @@ export interface E2eEnvironment {
   close(): Promise<void>;
 }
 
-function listen(testApp: TestApp): Promise<Server> {
+/** A port the OS has just handed out on 127.0.0.1 (free again once this returns). */
+function freePort(): Promise<number> {
   return new Promise((resolve, reject) => {
-    const server = testApp.app.listen(0, "127.0.0.1", () => resolve(server));
+    const probe = net.createServer();
+    probe.once("error", reject);
+    probe.listen(0, "127.0.0.1", () => {
+      const { port } = probe.address() as AddressInfo;
+      probe.close(() => resolve(port));
+    });
+  });
+}
+
+function listen(testApp: TestApp, port: number): Promise<Server> {
+  return new Promise((resolve, reject) => {
+    const server = testApp.app.listen(port, "127.0.0.1", () => resolve(server));
     server.once("error", reject);
   });
 }
@@ -94,8 +106,12 @@ export async function startE2e(prefix: string): Promise<E2eEnvironment> {
   try {
     const webDist = snapshotWebDist(path.resolve(here, "../../apps/web/dist"));
     stops.push(async () => fs.rmSync(webDist, { recursive: true, force: true }));
+    // The port is chosen first so hand-off mail links (PUBLIC_URL) point at this very server.
+    const port = await freePort();
+    const baseUrl = `http://127.0.0.1:${port}`;
     const app = await createTestApp({
       env: {
+        PUBLIC_URL: baseUrl,
         NODE_ENV: "production",
         SERVE_WEB: "true",
         WEB_DIST_DIR: webDist,
@@ -105,9 +121,8 @@ export async function startE2e(prefix: string): Promise<E2eEnvironment> {
       },
     });
     stops.push(() => app.close());
-    const server = await listen(app);
+    const server = await listen(app, port);
     stops.push(() => closeServer(server));
-    const baseUrl = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
 
     if (!fs.existsSync(chromiumPath)) {
       throw new Error(`no Chromium at ${chromiumPath}; install it with: bash scripts/bootstrap.sh --browser`);
