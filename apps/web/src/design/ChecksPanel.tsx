@@ -123,7 +123,7 @@ export function ChecksPanel({ model, result = null, units, shape, material, solv
           {outcome.notes.map((n) => (
             <p key={n} className="text-xs text-paper-600">{n}</p>
           ))}
-          {outcome.resolved && <p className="text-xs text-paper-600">Solved again with stations at the span ends, braces and quarter points for exact Cb and deflections.</p>}
+          {outcome.resolved && <p className="text-xs text-paper-600">Results read again at the span ends, braces and quarter points for exact Cb and deflections.</p>}
           {outcome.rows.length === 0 ? <p className="text-sm text-paper-600">Choose cases or combinations to check.</p> : <CheckTable rows={outcome.rows} units={units} />}
         </>
       ) : (

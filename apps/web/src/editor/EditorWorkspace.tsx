@@ -14,6 +14,7 @@ import { SegmentsTable } from "./tables/SegmentsTable";
 import { LoadsTable } from "./tables/LoadsTable";
 import { CasesTable } from "./tables/CasesTable";
 import { CombinationsTable } from "./tables/CombinationsTable";
+import { TheorySettings } from "./design/TheorySettings";
 
 const tabs = [
   { id: "nodes", label: "Nodes", Component: NodesTable },
@@ -57,6 +58,7 @@ export function EditorWorkspace() {
           <Inspector />
         </aside>
       </div>
+      <TheorySettings />
       <ResultsPanel state={analysis} />
       <section aria-label="Tables" className="rounded-md border border-paper-300 bg-white">
         <div role="tablist" aria-label="Tables" className="flex gap-1 border-b border-paper-300 px-2 pt-2">

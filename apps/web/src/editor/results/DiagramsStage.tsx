@@ -16,16 +16,19 @@ export interface DiagramsStageProps {
   readonly units: UnitSystemId;
   readonly hoverX: number | null;
   readonly onHover: (x: number | null) => void;
+  /** A click picks x for the section view. */
+  readonly onPick?: (x: number) => void;
 }
 
 /** V, M, deflection and rotation stacked under the beam, on the canvas's camera. */
-export function DiagramsStage({ analysis, name, isEnvelope, camera, width, units, hoverX, onHover }: DiagramsStageProps) {
+export function DiagramsStage({ analysis, name, isEnvelope, camera, width, units, hoverX, onHover, onPick }: DiagramsStageProps) {
   const series = useMemo(() => quantities.map((q) => seriesFor(analysis, name, isEnvelope, q)), [analysis, name, isEnvelope]);
   const height = ROW_HEIGHT * quantities.length;
   return (
     <div
       onPointerMove={(e) => onHover(screenToWorldX(camera, e.clientX - e.currentTarget.getBoundingClientRect().left))}
       onPointerLeave={() => onHover(null)}
+      onClick={(e) => onPick?.(screenToWorldX(camera, e.clientX - e.currentTarget.getBoundingClientRect().left))}
     >
     <Stage width={width} height={height}>
       <Layer listening={false}>

@@ -1,4 +1,4 @@
-import { useRef } from "react";
+import { useRef, useState } from "react";
 import { useEditor, useEditorStore } from "../store/useEditor";
 import { useElementWidth } from "../view/useElementWidth";
 import type { AnalysisState } from "./useAnalysis";
@@ -6,14 +6,26 @@ import { DiagramsStage } from "./DiagramsStage";
 import { ResultTargetSelect } from "./ResultTargetSelect";
 import { ResultsReadout } from "./ResultsReadout";
 import { defaultTarget, targetName } from "./resultSeries";
+import { EditorChecks } from "../design/EditorChecks";
+import { SectionAtCursor } from "../design/SectionAtCursor";
 
-/** Live results under the canvas: diagrams on the canvas's x scale, and exact numbers beside them. */
+type ResultsTab = "diagrams" | "checks";
+const resultsTabs: readonly { id: ResultsTab; label: string }[] = [
+  { id: "diagrams", label: "Diagrams" },
+  { id: "checks", label: "Checks" },
+];
+
+/** Live results under the canvas: diagrams on the canvas's x scale with exact numbers beside
+ * them and the section at a picked x; and the member checks. */
 export function ResultsPanel({ state }: { state: AnalysisState }) {
   const store = useEditorStore();
   const doc = useEditor((s) => s.history.doc);
   const chosen = useEditor((s) => s.ui.resultTarget);
   const camera = useEditor((s) => s.ui.camera);
   const hoverX = useEditor((s) => s.ui.hoverX);
+  const sectionX = useEditor((s) => s.ui.sectionX);
+  const selection = useEditor((s) => s.ui.selection);
+  const [tab, setTab] = useState<ResultsTab>("diagrams");
   const container = useRef<HTMLDivElement>(null);
   const width = useElementWidth(container);
   const target = chosen ?? defaultTarget(doc);
@@ -24,7 +36,23 @@ export function ResultsPanel({ state }: { state: AnalysisState }) {
     <section aria-label="Results" className="space-y-2">
       <div className="flex flex-wrap items-center gap-3">
         <h2 className="text-sm font-semibold text-ink-900">Results</h2>
-        <ResultTargetSelect doc={doc} value={target} onChange={(t) => store.setUi({ resultTarget: t })} />
+        <div role="tablist" aria-label="Results views" className="flex gap-1">
+          {resultsTabs.map((t) => (
+            <button
+              key={t.id}
+              type="button"
+              role="tab"
+              id={`results-tab-${t.id}`}
+              aria-selected={tab === t.id}
+              aria-controls={`results-panel-${t.id}`}
+              onClick={() => setTab(t.id)}
+              className={`rounded-sm px-2 py-0.5 text-sm ${tab === t.id ? "bg-ink-800 text-paper-50" : "text-paper-700 hover:bg-paper-200"}`}
+            >
+              {t.label}
+            </button>
+          ))}
+        </div>
+        {tab === "diagrams" && <ResultTargetSelect doc={doc} value={target} onChange={(t) => store.setUi({ resultTarget: t })} />}
         <span className="text-xs text-paper-600" aria-live="polite">
           {state.status === "solving" ? "Solving…" : state.status === "ready" ? "Up to date" : ""}
         </span>
@@ -36,16 +64,31 @@ export function ResultsPanel({ state }: { state: AnalysisState }) {
           {state.error.where && <p className="text-xs">Where: {state.error.where} (highlighted on the beam)</p>}
         </div>
       )}
-      <div className="grid grid-cols-1 gap-3 xl:grid-cols-[1fr_20rem]">
-        <div ref={container} className="min-w-0 overflow-hidden rounded-md border border-paper-300">
-          {state.status === "ready" && name ? (
-            <DiagramsStage analysis={state.analysis} name={name} isEnvelope={isEnvelope} camera={camera} width={width} units={doc.units} hoverX={hoverX} onHover={(x) => store.setUi({ hoverX: x })} />
-          ) : (
-            <p className="p-4 text-sm text-paper-600">{state.status === "solving" ? "Solving…" : name ? "No diagrams until the model solves." : "Add a load case to see results."}</p>
+      {tab === "diagrams" ? (
+        <div id="results-panel-diagrams" role="tabpanel" aria-labelledby="results-tab-diagrams" className="space-y-3">
+          <div className="grid grid-cols-1 gap-3 xl:grid-cols-[1fr_20rem]">
+            <div ref={container} className="min-w-0 overflow-hidden rounded-md border border-paper-300">
+              {state.status === "ready" && name ? (
+                <DiagramsStage analysis={state.analysis} name={name} isEnvelope={isEnvelope} camera={camera} width={width} units={doc.units} hoverX={hoverX} onHover={(x) => store.setUi({ hoverX: x })} onPick={(x) => store.setUi({ sectionX: x })} />
+              ) : (
+                <p className="p-4 text-sm text-paper-600">{state.status === "solving" ? "Solving…" : name ? "No diagrams until the model solves." : "Add a load case to see results."}</p>
+              )}
+            </div>
+            {state.status === "ready" && name && <ResultsReadout analysis={state.analysis} name={name} isEnvelope={isEnvelope} hoverX={hoverX} units={doc.units} />}
+          </div>
+          {state.status === "ready" && (
+            <SectionAtCursor doc={doc} analysis={state.analysis} name={isEnvelope ? null : name} x={sectionX} onX={(x) => store.setUi({ sectionX: x })} />
           )}
         </div>
-        {state.status === "ready" && name && <ResultsReadout analysis={state.analysis} name={name} isEnvelope={isEnvelope} hoverX={hoverX} units={doc.units} />}
-      </div>
+      ) : (
+        <div id="results-panel-checks" role="tabpanel" aria-labelledby="results-tab-checks" className="rounded-md border border-paper-300 bg-white">
+          {state.status === "ready" ? (
+            <EditorChecks doc={doc} analysis={state.analysis} segmentId={selection?.kind === "segment" ? selection.id : null} />
+          ) : (
+            <p className="p-4 text-sm text-paper-600">{state.status === "solving" ? "Solving…" : "The checks need a beam that solves."}</p>
+          )}
+        </div>
+      )}
     </section>
   );
 }

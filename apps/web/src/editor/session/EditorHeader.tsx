@@ -1,4 +1,5 @@
 import { useRef } from "react";
+import { Link, useParams } from "react-router";
 import { replaceDocument, setTheory, setUnits } from "../commands/documentCommands";
 import { createTemplate, templateLabels, type TemplateId } from "../model/templates";
 import type { Theory } from "../model/BeamDocument";
@@ -26,6 +27,7 @@ export function EditorHeader({ beamName, version, isDirty, canSave, saving, onSa
   const units = useEditor((s) => s.history.doc.units);
   const theory = useEditor((s) => s.history.doc.theory);
   const fileInput = useRef<HTMLInputElement>(null);
+  const { projectId, beamId } = useParams();
 
   const open = (label: string, next: ReturnType<typeof createTemplate>) => {
     if (store.run((d) => replaceDocument(d, { next, label }))) {
@@ -74,6 +76,11 @@ export function EditorHeader({ beamName, version, isDirty, canSave, saving, onSa
         if (result.ok) open(`Import ${file.name}`, result.doc);
         else store.setUi({ notice: { tone: "error", text: result.message } });
       }} />
+      {projectId && beamId && (
+        <Link to={`/projects/${projectId}/beams/${beamId}/design`} className="text-sm text-ink-700 underline hover:text-ink-900" title="Member checks on the saved revision">
+          Design checks
+        </Link>
+      )}
       <div className="ml-auto flex items-center gap-2">
         {!canSave && <span className="text-xs text-paper-600">Read only: your role cannot save revisions.</span>}
         <Button size="sm" variant="primary" onClick={onSave} disabled={!canSave || !isDirty} busy={saving} busyLabel="Saving…" title="Save a new revision (Ctrl+S)">

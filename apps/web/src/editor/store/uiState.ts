@@ -44,6 +44,8 @@ export interface UiState {
   readonly resultTarget: ResultTarget | null;
   /** World x (m) under the pointer, for the diagram cursor; null when outside. */
   readonly hoverX: number | null;
+  /** World x (m) picked on the diagrams (or typed) for the section view; null until chosen. */
+  readonly sectionX: number | null;
   readonly notice: Notice | null;
   /** A load being drawn by the place-load tool, shown on the interactive layer. */
   readonly preview: { readonly x1: number; readonly x2: number } | null;
@@ -61,6 +63,7 @@ export function createUiState(activeCaseId: CaseId | null, gridStep: number): Ui
     gridStep,
     resultTarget: null,
     hoverX: null,
+    sectionX: null,
     notice: null,
     preview: null,
   };

@@ -4,6 +4,7 @@ import { QuantityInput } from "../fields/QuantityInput";
 import { useEditor, useEditorStore } from "../store/useEditor";
 import { findAction } from "../actions/editorActions";
 import { navigateGrid, tableClasses as c } from "./gridNavigation";
+import { GenerateCombinationsButton } from "../design/GenerateCombinationsButton";
 
 /** Combinations as a grid of factors, one column per load case; an empty cell leaves the case out. */
 export function CombinationsTable() {
@@ -47,7 +48,10 @@ export function CombinationsTable() {
           ))}
         </tbody>
       </table>
-      <button type="button" className={c.addButton} onClick={() => findAction("add-combination").run(store)}>+ Combination</button>
+      <div className="flex gap-2">
+        <button type="button" className={c.addButton} onClick={() => findAction("add-combination").run(store)}>+ Combination</button>
+        <GenerateCombinationsButton className={c.addButton} />
+      </div>
     </div>
   );
 }

@@ -5,6 +5,7 @@ import { snapToGrid } from "../geometry/snapping";
 import type { QuantityKind } from "../units/unitSystems";
 import { useEditor, useEditorStore } from "../store/useEditor";
 import { navigateGrid, tableClasses as c } from "./gridNavigation";
+import { SectionButton } from "../design/SectionButton";
 
 const columns: readonly { key: keyof SectionProperties; label: string; kind: QuantityKind; optional: boolean }[] = [
   { key: "E", label: "E", kind: "modulus", optional: false },
@@ -27,6 +28,7 @@ export function SegmentsTable() {
         <tr>
           <th className={c.th}>Segment</th>
           <th className={c.th}>Length</th>
+          <th className={c.th}>Section</th>
           {columns.map((col) => (
             <th key={col.key} className={c.th} title={col.optional ? "Needed for Timoshenko theory only" : undefined}>{col.label}</th>
           ))}
@@ -42,6 +44,9 @@ export function SegmentsTable() {
               <td className={`${c.td} text-paper-600`}>{i + 1}</td>
               <td className={c.td}>
                 <QuantityInput label={`Segment ${i + 1} length`} value={b - a} kind="length" units={units} onCommit={(length) => store.run((d) => setSegmentLength(d, { segmentId: s.id, length }))} />
+              </td>
+              <td className={c.td}>
+                <SectionButton segmentId={s.id} number={i + 1} className={c.smallButton} />
               </td>
               {columns.map((col) => (
                 <td key={col.key} className={c.td}>

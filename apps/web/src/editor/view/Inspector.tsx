@@ -7,6 +7,7 @@ import { findLoad, findNode, supportTypes, type Load, type SupportType } from ".
 import type { CaseId } from "../model/ids";
 import { useEditor, useEditorStore } from "../store/useEditor";
 import { defaultSupport } from "../tools/placeSupport/placeSupportTool";
+import { SectionButton } from "../design/SectionButton";
 
 function Field({ label, children }: { label: string; children: ReactNode }) {
   return (
@@ -64,6 +65,10 @@ export function Inspector() {
       <div className="space-y-2">
         <h3 className="text-sm font-semibold text-ink-900">Segment {index + 1}</h3>
         <Field label="Length"><QuantityInput label="Length" value={length} kind="length" units={u} onCommit={(l) => run((d) => setSegmentLength(d, { segmentId: seg.id, length: l }))} /></Field>
+        <div className="grid grid-cols-[6rem_1fr] items-center gap-2 text-sm">
+          <span className="text-paper-700">Section</span>
+          <SectionButton segmentId={seg.id} number={index + 1} className="rounded-sm border border-paper-300 px-2 py-0.5 text-left text-xs text-ink-800 hover:bg-paper-50" />
+        </div>
         <Field label="E"><QuantityInput label="Modulus of elasticity E" value={seg.E} kind="modulus" units={u} onCommit={(E) => run((d) => editSegment(d, { segmentId: seg.id, props: { E } }))} /></Field>
         <Field label="I"><QuantityInput label="Second moment of area I" value={seg.I} kind="secondMoment" units={u} onCommit={(I) => run((d) => editSegment(d, { segmentId: seg.id, props: { I } }))} /></Field>
         {doc.theory === "timoshenko" && (

@@ -1,0 +1,57 @@
+import { useState } from "react";
+import { findMaterialPreset, MATERIAL_PRESETS, type Material, type SectionShape } from "@spanwright/solver/design";
+import { MaterialPicker, SectionEditor } from "../../design";
+import { DEFAULT_SHAPES, SHAPE_LABELS } from "../../design/shapeFields";
+import { Button } from "../../components/Button";
+import { setSegmentSection } from "../commands/designCommands";
+import type { SegmentId } from "../model/ids";
+import { useEditor, useEditorStore } from "../store/useEditor";
+import { EditorDialog } from "./EditorDialog";
+
+export interface SectionButtonProps {
+  readonly segmentId: SegmentId;
+  /** 1-based, for labels. */
+  readonly number: number;
+  readonly className?: string;
+}
+
+/** "Section…": a shape and a material for the segment (or every segment), setting E, I, A, G, κ. */
+export function SectionButton({ segmentId, number, className }: SectionButtonProps) {
+  const [open, setOpen] = useState(false);
+  const section = useEditor((s) => s.history.doc.segments.find((g) => g.id === segmentId)?.section);
+  return (
+    <>
+      <button type="button" className={className} aria-label={`Section of segment ${number}`} onClick={() => setOpen(true)}>
+        {section ? `${SHAPE_LABELS[section.shape.kind]}, ${section.material.name}` : "Section…"}
+      </button>
+      {open && <SectionDialog segmentId={segmentId} number={number} onClose={() => setOpen(false)} />}
+    </>
+  );
+}
+
+function SectionDialog({ segmentId, number, onClose }: { segmentId: SegmentId; number: number; onClose: () => void }) {
+  const store = useEditorStore();
+  const doc = useEditor((s) => s.history.doc);
+  const current = doc.segments.find((g) => g.id === segmentId)?.section;
+  const [shape, setShape] = useState<SectionShape>(current?.shape ?? DEFAULT_SHAPES["i-shape"]);
+  const [material, setMaterial] = useState<Material>(current?.material ?? findMaterialPreset("steel-a992") ?? MATERIAL_PRESETS[0]!);
+  const apply = (segmentIds: readonly SegmentId[]) => {
+    if (store.run((d) => setSegmentSection(d, { segmentIds, shape, material }))) onClose();
+  };
+  return (
+    <EditorDialog title={`Section and material: segment ${number}`} onClose={onClose}>
+      <div className="space-y-5">
+        <MaterialPicker units={doc.units} initial={material} onChange={setMaterial} />
+        <SectionEditor units={doc.units} initialShape={shape} material={material} theory={doc.theory} onChange={(c) => setShape(c.shape)} />
+        <p className="text-xs text-paper-600">
+          Sets E, I (and A, G, κ where the material has G) of the segment. The revision saves those values; the shape and material
+          themselves stay with this editing session only.
+        </p>
+        <div className="flex flex-wrap justify-end gap-2">
+          <Button variant="secondary" onClick={() => apply(doc.segments.map((g) => g.id))}>Apply to all {doc.segments.length} segments</Button>
+          <Button variant="primary" onClick={() => apply([segmentId])}>Apply to segment {number}</Button>
+        </div>
+      </div>
+    </EditorDialog>
+  );
+}
