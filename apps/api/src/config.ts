@@ -37,6 +37,10 @@ const envSchema = z.object({
   OUTBOX_ENABLED: z.enum(["true", "false"]).optional(),
   /** Base of links in e-mails (the revision a hand-off points at). */
   PUBLIC_URL: z.string().url().optional(),
+  /** Longest one solve may run on a solver thread before it is stopped (422 too-large). */
+  SOLVE_TIMEOUT_MS: z.coerce.number().int().positive().default(5000),
+  /** Solver threads; default: the cores available. */
+  SOLVER_THREADS: z.coerce.number().int().positive().optional(),
 });
 
 export interface Config {
@@ -56,6 +60,7 @@ export interface Config {
   readonly outboxEnabled: boolean;
   /** No trailing slash. */
   readonly publicUrl: string;
+  readonly solver: { readonly timeoutMs: number; readonly threads: number | null };
 }
 
 export type MailConfig =
@@ -115,5 +120,6 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     mail: parseMail(e),
     outboxEnabled: e.OUTBOX_ENABLED ? e.OUTBOX_ENABLED === "true" : e.NODE_ENV !== "production",
     publicUrl: (e.PUBLIC_URL ?? `http://${e.HOST}:${e.PORT}`).replace(/\/+$/, ""),
+    solver: { timeoutMs: e.SOLVE_TIMEOUT_MS, threads: e.SOLVER_THREADS ?? null },
   };
 }

@@ -3,7 +3,7 @@ import { createApp } from "./app.js";
 import { loadConfig } from "./config.js";
 import { connectDatabase } from "./db/client.js";
 import { createMailer } from "./mail/mailer.js";
-import { solverEngine } from "./solve/solverEngine.js";
+import { createSolverPool } from "./solve/solverPool.js";
 
 const config = loadConfig();
 const logger = pino({ level: config.logLevel });
@@ -16,7 +16,8 @@ if (config.mail.mode === "catcher") {
 } else if (!config.mail.host) {
   logger.warn("SMTP_HOST is not set: hand-offs will fail until it is");
 }
-const { app } = createApp({ config, database, engine: solverEngine, logger, mailer });
+const solverPool = createSolverPool({ timeoutMs: config.solver.timeoutMs, ...(config.solver.threads ? { threads: config.solver.threads } : {}) });
+const { app } = createApp({ config, database, engine: solverPool, logger, mailer });
 
 const server = app.listen(config.port, config.host, () => {
   logger.info(`Spanwright is listening on http://${config.host}:${config.port}`);
@@ -25,7 +26,7 @@ const server = app.listen(config.port, config.host, () => {
 function shutdown(signal: string): void {
   logger.info({ signal }, "shutting down");
   server.close(() => {
-    void Promise.allSettled([mailer.close(), database.close()]).finally(() => process.exit(0));
+    void Promise.allSettled([mailer.close(), database.close(), solverPool.close()]).finally(() => process.exit(0));
   });
   setTimeout(() => process.exit(0), 5000).unref();
 }

@@ -24,6 +24,7 @@ export const errorCodes = [
   "rate-limited", // 429
   "internal", // 500
   "database-unavailable", // 503
+  "solver-busy", // 503: every solver thread is busy and the queue is full; Retry-After says when to retry
 ] as const;
 export const errorCodeSchema = z.enum(errorCodes);
 export type ErrorCode = z.infer<typeof errorCodeSchema>;
@@ -51,6 +52,7 @@ export const errorStatus: Record<ErrorCode, number> = {
   "rate-limited": 429,
   internal: 500,
   "database-unavailable": 503,
+  "solver-busy": 503,
 };
 
 export const validationIssueSchema = z.object({
@@ -79,4 +81,12 @@ export const apiLimits = {
   loadCases: 50,
   loadsPerCase: 500,
   combinations: 50,
+  /** Requested output positions (`stations`). */
+  stations: 5000,
+  /**
+   * The solver's work as the API estimates it (apps/api/src/solve/engine.ts `measureWork`):
+   * nodes × loads + patterned cases × nodes³ / 20 + stations × (cases + combinations). A model at
+   * this bound solves in about a second on the 2-core server, well inside SOLVE_TIMEOUT_MS (5 s).
+   */
+  work: 250_000,
 } as const;

@@ -35,7 +35,7 @@ export function createBeamsService(deps: { db: Db; clock: Clock; engine: Engine 
     /** Creates the beam and its revision 1, solved on the server, in one transaction. */
     async create(actorId: string, projectId: string, input: Required<CreateBeamRequest>): Promise<BeamResponse> {
       await authorize(db, projectId, actorId, "edit");
-      const result = runSolver(engine, input.model);
+      const result = await runSolver(engine, input.model);
       const now = clock.now();
       return inTransaction(db, async (tx) => {
         const beam = await repo.insertBeam(tx, { projectId, name: input.name, now });

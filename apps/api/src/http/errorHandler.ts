@@ -41,6 +41,8 @@ export const errorHandler: ErrorRequestHandler = (error, req, res, _next) => {
       ...(appError.details ? { details: appError.details } : {}),
     },
   };
+  const retryAfter = appError.details?.retryAfterSeconds;
+  if (typeof retryAfter === "number") res.setHeader("Retry-After", String(retryAfter));
   res.status(status).json(body);
 };
 

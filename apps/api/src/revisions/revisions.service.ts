@@ -43,7 +43,7 @@ export function createRevisionsService(deps: { db: Db; clock: Clock; engine: Eng
     async save(actorId: string, projectId: string, beamId: string, input: Required<SaveRevisionRequest>): Promise<Revision> {
       await authorize(db, projectId, actorId, "edit");
       await beams.requireBeam(db, projectId, beamId);
-      const result = runSolver(engine, input.model);
+      const result = await runSolver(engine, input.model);
       const now = clock.now();
       const version = input.baseVersion + 1;
       // the diff is against the edited revision; if it is not the latest, the save below conflicts

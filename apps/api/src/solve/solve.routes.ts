@@ -1,7 +1,7 @@
 import { apiRoutes } from "@spanwright/contracts";
 import type { Router } from "express";
 import { requireAuth } from "../auth/sessionCookie.js";
-import { runSolver, type Engine } from "./engine.js";
+import { runSolverJson, type Engine } from "./engine.js";
 
 /**
  * Stateless `POST /api/solve`: the body is a model, the answer the result (200) or the solver's
@@ -9,8 +9,9 @@ import { runSolver, type Engine } from "./engine.js";
  * level too, as the exchange format's error object has it.
  */
 export function registerSolveRoutes(router: Router, engine: Engine): void {
-  router.post(apiRoutes.solve.path, (req, res) => {
+  router.post(apiRoutes.solve.path, async (req, res) => {
     requireAuth(res);
-    res.json(runSolver(engine, req.body));
+    // the solver thread already wrote the JSON: send it as it is rather than parse and re-serialise
+    res.type("application/json").send(await runSolverJson(engine, req.body));
   });
 }

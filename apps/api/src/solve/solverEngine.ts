@@ -1,7 +1,10 @@
 import { solve } from "@spanwright/solver";
-import type { Engine, SolveResultJson } from "./engine.js";
+import type { Engine } from "./engine.js";
 
-/** The real engine from the solver package. */
+/**
+ * The engine on the calling thread: for tests and scripts that solve a few small models. The server
+ * uses the thread pool (solverPool.ts) so a long solve cannot block other requests.
+ */
 export const solverEngine: Engine = {
-  solve: (model) => solve(model) as unknown as SolveResultJson,
+  solve: async (model) => JSON.stringify(solve(model)),
 };

@@ -1,0 +1,55 @@
+import { afterAll, describe, expect, it } from "vitest";
+import { twoSpanModel } from "../testing/models.js";
+import { createSolverPool } from "./solverPool.js";
+
+/** Invented: a 300-span beam with a patterned live case, seconds of solver time (far past the API's work limit, which the pool does not check). */
+function slowModel(): Record<string, unknown> {
+  const spans = 300;
+  return {
+    format: "spanwright.beam/1",
+    nodes: Array.from({ length: spans + 1 }, (_, i) => ({ x: i * 5, support: { type: "pinned" } })),
+    segments: Array.from({ length: spans }, () => ({ E: 2e11, I: 2.5e-4 })),
+    loadCases: [{ id: "Q", category: "live", pattern: true, loads: [{ type: "distributed", x1: 0, x2: spans * 5, qy1: -5000, qy2: -5000 }] }],
+  };
+}
+
+const pool = createSolverPool({ threads: 2, timeoutMs: 3_000, maxQueue: 4 });
+// threads start in the background; the first test waits for them
+afterAll(() => pool.close());
+
+describe("solver pool", () => {
+  it("solves on a worker thread and answers the result as JSON text", async () => {
+    const result = JSON.parse(await pool.solve(twoSpanModel()));
+    expect(result.format).toBe("spanwright.result/1");
+  }, 20_000);
+
+  it("passes the solver's own errors back with code and where", async () => {
+    const model = { ...twoSpanModel(), segments: [{ E: 2e11, I: -1 }, { E: 2e11, I: 1e-4 }] };
+    await expect(pool.solve(model)).rejects.toMatchObject({ name: "SolverError", code: "invalid-model", where: expect.stringContaining("segments") });
+  });
+
+  it("stops a solve at the deadline with too-large, and keeps answering small models meanwhile", async () => {
+    const started = Date.now();
+    const slow = pool.solve(slowModel()).catch((error: unknown) => error);
+    const small = await pool.solve(twoSpanModel());
+    const smallAt = Date.now() - started;
+    expect(await slow).toMatchObject({ name: "SolverError", code: "too-large" });
+    const slowAt = Date.now() - started;
+    expect(JSON.parse(small).format).toBe("spanwright.result/1");
+    // queued behind the slow solve it would wait for the deadline (a busy shared machine is slow, not that slow)
+    expect(smallAt).toBeLessThan(2_500);
+    // the deadline plus the time to end the thread; the solve alone would take seconds
+    expect(slowAt).toBeGreaterThanOrEqual(3_000);
+    expect(slowAt).toBeLessThan(6_000);
+    // the ended thread was replaced: both threads solve again
+    const both = await Promise.all([pool.solve(twoSpanModel()), pool.solve(twoSpanModel())]);
+    expect(both.map((json) => JSON.parse(json).format)).toEqual(["spanwright.result/1", "spanwright.result/1"]);
+  }, 20_000);
+
+  it("answers solver-busy at once when the queue is full", async () => {
+    const running = [pool.solve(slowModel()), pool.solve(slowModel())];
+    const queued = Array.from({ length: 4 }, () => pool.solve(twoSpanModel()));
+    await expect(pool.solve(twoSpanModel())).rejects.toMatchObject({ code: "solver-busy", details: { retryAfterSeconds: 2 } });
+    await Promise.allSettled([...running, ...queued]);
+  }, 20_000);
+});
