@@ -14,6 +14,7 @@ const actors: readonly Actor[] = ["owner", "engineer", "checker", "viewer", "out
 interface Fixture {
   projectId: string;
   beamId: string;
+  sectionId: string;
   /** A member who is neither an actor nor the owner: the target of role changes and removals. */
   extraUserId: string;
 }
@@ -26,6 +27,10 @@ interface Call {
   /** For multipart routes: the file in the field `file` and text fields. */
   upload?: { file: { name: string; content: string }; fields?: Record<string, string> };
 }
+
+/** An invented rectangular timber section, SI. */
+const sectionShape = { kind: "rectangle", b: 0.09, h: 0.24 };
+const sectionMaterial = { id: "timber", name: "Sawn timber (demo)", kind: "timber", E: 11e9, typical: true, note: "typical values, confirm for your project", source: "demo" };
 
 const scheduleCsv = "case,type,position,magnitude\nD,point,2 m,-10 kN\n";
 
@@ -72,6 +77,10 @@ const calls: Record<RouteName, (f: Fixture) => Call> = {
   }),
   listProjectHandoffs: (f) => ({ params: { projectId: f.projectId } }),
   listBeamHandoffs: (f) => ({ params: { projectId: f.projectId, beamId: f.beamId } }),
+  listSections: (f) => ({ params: { projectId: f.projectId } }),
+  createSection: (f) => ({ params: { projectId: f.projectId }, body: { name: "New section", shape: sectionShape, material: sectionMaterial } }),
+  updateSection: (f) => ({ params: { projectId: f.projectId, sectionId: f.sectionId }, body: { name: "Renamed section" } }),
+  deleteSection: (f) => ({ params: { projectId: f.projectId, sectionId: f.sectionId } }),
   outbox: () => ({ params: {} }),
 };
 
@@ -122,6 +131,10 @@ const expectedAccess: Record<RouteName, "public" | "signed-in" | "owner-of-any-p
   createHandoff: "edit",
   listProjectHandoffs: "read",
   listBeamHandoffs: "read",
+  listSections: "read",
+  createSection: "edit",
+  updateSection: "edit",
+  deleteSection: "edit",
   outbox: "owner-of-any-project",
 };
 
@@ -150,14 +163,15 @@ let foreign: Fixture;
 let shared: Fixture;
 
 async function createFixture(): Promise<Fixture> {
-  const { projects, members, beams } = t.services;
+  const { projects, members, beams, sections } = t.services;
   const project = await projects.create(ids.owner, { name: "Matrix", unitSystem: "si", compareThresholdPercent: 5 });
   for (const role of ["engineer", "checker", "viewer"] as const) {
     await members.invite(ids.owner, project.id, { email: emails[role], role });
   }
   await members.invite(ids.owner, project.id, { email: emails.extra, role: "viewer" });
   const { beam } = await beams.create(ids.owner, project.id, { name: "B", model: twoSpanModel(), changeSummary: "" });
-  return { projectId: project.id, beamId: beam.id, extraUserId: ids.extra };
+  const section = await sections.create(ids.owner, project.id, { name: "S", shape: sectionShape, material: sectionMaterial });
+  return { projectId: project.id, beamId: beam.id, sectionId: section.id, extraUserId: ids.extra };
 }
 
 const emails = {} as Record<Exclude<Actor, "anonymous"> | "extra", string>;
@@ -173,7 +187,8 @@ beforeAll(async () => {
   // the outsider's own project: its ids must be "not found" from inside the fixture project
   const other = await t.services.projects.create(ids.outsider, { name: "Elsewhere", unitSystem: "si", compareThresholdPercent: 5 });
   const { beam } = await t.services.beams.create(ids.outsider, other.id, { name: "Foreign", model: twoSpanModel(), changeSummary: "" });
-  foreign = { projectId: other.id, beamId: beam.id, extraUserId: ids.outsider };
+  const section = await t.services.sections.create(ids.outsider, other.id, { name: "Foreign", shape: sectionShape, material: sectionMaterial });
+  foreign = { projectId: other.id, beamId: beam.id, sectionId: section.id, extraUserId: ids.outsider };
   shared = await createFixture();
 });
 afterAll(() => t.close());
@@ -232,10 +247,10 @@ describe("public routes", () => {
 });
 
 describe("ids from another project", () => {
-  const withForeignIds = guarded.filter((n) => /:(beamId|userId)/.test(apiRoutes[n].path));
-  it.each(withForeignIds)("%s answers 404 to an allowed member for another project's beam or user", async (name) => {
+  const withForeignIds = guarded.filter((n) => /:(beamId|userId|sectionId)/.test(apiRoutes[n].path));
+  it.each(withForeignIds)("%s answers 404 to an allowed member for another project's beam, section or user", async (name) => {
     const fixture = await createFixture();
-    const mixed: Fixture = { projectId: fixture.projectId, beamId: foreign.beamId, extraUserId: foreign.extraUserId };
+    const mixed: Fixture = { projectId: fixture.projectId, beamId: foreign.beamId, sectionId: foreign.sectionId, extraUserId: foreign.extraUserId };
     const access = apiRoutes[name].access;
     const allowed = (["owner", "engineer", "checker", "viewer"] as const).find((r) => access === "signed-in" || access === "public" || access === "owner-of-any-project" || can(r, access))!;
     const res = await send(allowed, name, calls[name](mixed));

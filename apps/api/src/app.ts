@@ -12,6 +12,8 @@ import { registerAuthRoutes } from "./auth/auth.routes.js";
 import { createAuthService } from "./auth/auth.service.js";
 import { loadSession } from "./auth/sessionCookie.js";
 import { registerBeamRoutes } from "./beams/beams.routes.js";
+import { registerSectionRoutes } from "./sections/sections.routes.js";
+import { createSectionsService } from "./sections/sections.service.js";
 import { createBeamsService } from "./beams/beams.service.js";
 import { systemClock, type Clock } from "./clock.js";
 import type { Config } from "./config.js";
@@ -59,6 +61,7 @@ export function createServices(deps: { database: Database; engine: Engine; clock
     projects: createProjectsService({ db, clock }),
     members: createMembersService({ db }),
     beams,
+    sections: createSectionsService({ db, clock }),
     revisions,
     reactions: createReactionsService({ db }),
     imports: createImportsService({ db, beams, revisions }),
@@ -95,6 +98,7 @@ function createApiRouter(deps: AppDeps, services: Services): Router {
   registerMemberRoutes(router, services.members);
   registerImportRoutes(router, services.imports);
   registerBeamRoutes(router, services.beams);
+  registerSectionRoutes(router, services.sections);
   // compare first: "…/revisions/compare" must not be read as a version
   registerReactionRoutes(router, services.reactions);
   registerRevisionRoutes(router, services.revisions);

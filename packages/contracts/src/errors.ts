@@ -13,10 +13,12 @@ export const errorCodes = [
   "last-owner", // 409: the last owner cannot be removed or demoted
   "version-conflict", // 409: baseVersion is not the latest; details.current is the latest revision
   "already-checked", // 409: a checked revision is immutable
+  "name-taken", // 409: a project section with this name exists; details.name
   "file-too-large", // 413: an upload over uploadLimits.fileBytes (nothing is written)
   "invalid-file", // 422: an upload that is not what the route takes (not JSON, not CSV, no file)
   "invalid-schedule", // 422: a load schedule with row errors; details.errors lists them
   "invalid-recipient", // 422: a hand-off recipient who is not a viewer member; details.recipient
+  "invalid-section", // 422: a section shape or material the design rules reject; details.field names it
   "mail-failed", // 502: the SMTP server did not accept the hand-off; nothing was recorded
   "too-large", // 413 for bodies over the byte limit, 422 for models over the size limits
   "invalid-model", // 422: the solver rejected the model; details.where names the path
@@ -41,10 +43,12 @@ export const errorStatus: Record<ErrorCode, number> = {
   "last-owner": 409,
   "version-conflict": 409,
   "already-checked": 409,
+  "name-taken": 409,
   "file-too-large": 413,
   "invalid-file": 422,
   "invalid-schedule": 422,
   "invalid-recipient": 422,
+  "invalid-section": 422,
   "mail-failed": 502,
   "too-large": 422,
   "invalid-model": 422,

@@ -3,6 +3,7 @@ export * from "./errors.js";
 export * from "./auth.js";
 export * from "./projects.js";
 export * from "./beams.js";
+export * from "./sections.js";
 export * from "./reactions.js";
 export * from "./handoffs.js";
 export * from "./imports.js";

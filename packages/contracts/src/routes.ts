@@ -66,6 +66,11 @@ export const apiRoutes = {
   listProjectHandoffs: { method: "GET", path: "/api/projects/:projectId/handoffs", access: "read", status: 200 },
   listBeamHandoffs: { method: "GET", path: "/api/projects/:projectId/beams/:beamId/handoffs", access: "read", status: 200 },
 
+  listSections: { method: "GET", path: "/api/projects/:projectId/sections", access: "read", status: 200 },
+  createSection: { method: "POST", path: "/api/projects/:projectId/sections", access: "edit", status: 201 },
+  updateSection: { method: "PATCH", path: "/api/projects/:projectId/sections/:sectionId", access: "edit", status: 200 },
+  deleteSection: { method: "DELETE", path: "/api/projects/:projectId/sections/:sectionId", access: "edit", status: 204 },
+
   /** Development and tests only (404 in production unless OUTBOX_ENABLED). */
   outbox: { method: "GET", path: "/api/outbox", access: "owner-of-any-project", status: 200 },
 } as const satisfies Record<string, RouteSpec>;

@@ -16,7 +16,10 @@ export type AuditAction =
   | "beam.deleted"
   | "revision.saved"
   | "revision.checked"
-  | "revision.issued";
+  | "revision.issued"
+  | "section.created"
+  | "section.updated"
+  | "section.deleted";
 
 export async function recordAudit(
   db: Db,

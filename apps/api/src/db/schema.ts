@@ -215,3 +215,28 @@ export const handoffRecipients = pgTable(
     index("handoff_recipients_user_id_idx").on(t.userId),
   ],
 );
+
+/**
+ * Project sections (issue 6): a named cross-section and material reused across the project's
+ * beams. `shape` is a `SectionShape` and `material` a `Material` of @spanwright/solver/design,
+ * both SI and validated by the service before they are stored.
+ */
+export const projectSections = pgTable(
+  "project_sections",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    projectId: uuid("project_id")
+      .notNull()
+      .references(() => projects.id, { onDelete: "cascade" }),
+    name: text("name").notNull(),
+    shape: jsonb("shape").notNull(),
+    material: jsonb("material").notNull(),
+    createdBy: uuid("created_by").references(() => users.id, { onDelete: "set null" }),
+    createdAt: createdAt(),
+    updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [
+    uniqueIndex("project_sections_project_name_key").on(t.projectId, t.name),
+    check("project_sections_name_check", sql`length(${t.name}) between 1 and 120`),
+  ],
+);
