@@ -36,15 +36,13 @@ export function ResultsPanel({ state }: { state: AnalysisState }) {
     <section aria-label="Results" className="space-y-2">
       <div className="flex flex-wrap items-center gap-3">
         <h2 className="text-sm font-semibold text-ink-900">Results</h2>
-        <div role="tablist" aria-label="Results views" className="flex gap-1">
+        {/* A toggle rather than ARIA tabs: the tables below own the page's one tab list and panel. */}
+        <div role="group" aria-label="Results view" className="flex gap-1">
           {resultsTabs.map((t) => (
             <button
               key={t.id}
               type="button"
-              role="tab"
-              id={`results-tab-${t.id}`}
-              aria-selected={tab === t.id}
-              aria-controls={`results-panel-${t.id}`}
+              aria-pressed={tab === t.id}
               onClick={() => setTab(t.id)}
               className={`rounded-sm px-2 py-0.5 text-sm ${tab === t.id ? "bg-ink-800 text-paper-50" : "text-paper-700 hover:bg-paper-200"}`}
             >
@@ -65,7 +63,7 @@ export function ResultsPanel({ state }: { state: AnalysisState }) {
         </div>
       )}
       {tab === "diagrams" ? (
-        <div id="results-panel-diagrams" role="tabpanel" aria-labelledby="results-tab-diagrams" className="space-y-3">
+        <div className="space-y-3">
           <div className="grid grid-cols-1 gap-3 xl:grid-cols-[1fr_20rem]">
             <div ref={container} className="min-w-0 overflow-hidden rounded-md border border-paper-300">
               {state.status === "ready" && name ? (
@@ -81,7 +79,7 @@ export function ResultsPanel({ state }: { state: AnalysisState }) {
           )}
         </div>
       ) : (
-        <div id="results-panel-checks" role="tabpanel" aria-labelledby="results-tab-checks" className="rounded-md border border-paper-300 bg-white">
+        <div role="region" aria-label="Member checks on this beam" className="rounded-md border border-paper-300 bg-white">
           {state.status === "ready" ? (
             <EditorChecks doc={doc} analysis={state.analysis} segmentId={selection?.kind === "segment" ? selection.id : null} />
           ) : (
