@@ -8,6 +8,7 @@ export * from "./modelDiff.js";
 export * from "./modelDiffSummary.js";
 export * from "./compare.js";
 export { CAUTION, diagramStations, renderCalculationReport, type CalculationReportInput } from "./pdfReport.js";
+export type { ReportCheckRow, ReportCodeEdition } from "./pdfSections.js";
 export {
   sendHandoffMail,
   handoffSubject,

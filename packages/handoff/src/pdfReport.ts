@@ -1,9 +1,19 @@
 import PDFDocument from "pdfkit";
 import { solve } from "@spanwright/solver";
+import { CODE_EDITIONS, DESIGN_CAUTION } from "@spanwright/solver/design";
 import type { BeamModel, SolveResult } from "./exchange.js";
 import { drawBeam, drawDiagram, type DiagramCurve } from "./pdfDrawings.js";
 import { CONTENT_WIDTH, FONT, FONT_FILES, PAGE, columnsByWeight, drawTable, heading, paragraph, pdfSafe, type Doc } from "./pdfLayout.js";
-import { drawDeflections, drawExtremes, drawLoadTables, drawModelTables, drawReactionTable } from "./pdfSections.js";
+import {
+  drawDeflections,
+  drawExtremes,
+  drawLoadTables,
+  drawMemberChecks,
+  drawModelTables,
+  drawReactionTable,
+  type ReportCheckRow,
+  type ReportCodeEdition,
+} from "./pdfSections.js";
 import { buildReactionTable } from "./reactionTable.js";
 import { formatShort, type UnitSystem } from "./units.js";
 
@@ -26,6 +36,15 @@ export interface CalculationReportInput {
    * absent the report solves it itself with @spanwright/solver.
    */
   sampled?: SolveResult;
+  /**
+   * Member checks (rows as `steelBeamChecks` or the deflection and stress checks of
+   * @spanwright/solver/design give them). Without them the report has no "Member checks" section.
+   */
+  checks?: readonly ReportCheckRow[];
+  /** Which section and material the checks are for. */
+  checksBasis?: string;
+  /** Code editions the checks cite; defaults to the design package's `CODE_EDITIONS`. */
+  codeEditions?: readonly ReportCodeEdition[];
 }
 
 /**
@@ -160,6 +179,9 @@ export async function renderCalculationReport(input: CalculationReportInput): Pr
   drawReactionTable(doc, buildReactionTable(input.model, input.result), u);
   drawExtremes(doc, input.model, input.result, u);
   drawDeflections(doc, input.model, input.result, u);
+  if (input.checks && input.checks.length > 0) {
+    drawMemberChecks(doc, { rows: input.checks, codeEditions: input.codeEditions ?? CODE_EDITIONS, caution: DESIGN_CAUTION, ...(input.checksBasis ? { basis: input.checksBasis } : {}) }, u);
+  }
   drawDiagramPages(doc, input, sampled);
   drawFooters(doc, input);
   doc.end();

@@ -1,8 +1,9 @@
+import type { CheckResult } from "@spanwright/solver/design";
 import type { BeamLoad, BeamModel, CaseResult, SolveResult } from "./exchange.js";
-import { columnsByWeight, drawTable, heading, paragraph, type Doc } from "./pdfLayout.js";
+import { CONTENT_WIDTH, FONT, columnsByWeight, drawTable, heading, paragraph, pdfSafe, type Doc } from "./pdfLayout.js";
 import { describeRow, type ReactionTable } from "./reactionTable.js";
 import { listSpans, spanAt } from "./spans.js";
-import { displayUnit, formatNumber, formatShort, toDisplay, type UnitSystem } from "./units.js";
+import { IN_M, KIP_N, displayUnit, formatNumber, formatQuantity, formatShort, toDisplay, type UnitSystem } from "./units.js";
 
 /** Tabular sections of the calculation report, each drawn at doc.y. */
 
@@ -147,4 +148,100 @@ export function drawDeflections(doc: Doc, model: BeamModel, result: SolveResult,
       return [id, show(e.uyMin), ratio(e.uyMin), show(e.uyMax)];
     }),
   });
+}
+
+/** One check row of the report: which span and case, and the check as the design package gives it. */
+export interface ReportCheckRow {
+  readonly span: string;
+  readonly caseId: string;
+  readonly check: CheckResult;
+}
+
+export interface ReportCodeEdition {
+  readonly id: string;
+  readonly title: string;
+  readonly usedFor: string;
+}
+
+export interface MemberChecksInput {
+  readonly rows: readonly ReportCheckRow[];
+  /** Which section and material the checks are for, e.g. "I 300×150, structural steel Fy = 345 MPa". */
+  readonly basis?: string;
+  readonly codeEditions: readonly ReportCodeEdition[];
+  readonly caution: string;
+}
+
+// Stresses read in MPa or ksi (common practice), not in the modulus units of the model tables.
+const STRESS = { si: { label: "MPa", toSI: 1e6 }, us: { label: "ksi", toSI: KIP_N / (IN_M * IN_M) } } as const;
+
+/**
+ * The Latin subset of the report font has no Greek letters or maths signs; the check formulas use
+ * them, so spell them out rather than print missing-glyph boxes.
+ */
+const SPELLED: Record<string, string> = {
+  φ: "phi", Ω: "Omega", δ: "delta", σ: "sigma", τ: "tau", λ: "lambda", κ: "kappa", π: "pi", ψ: "psi",
+  "≤": "<=", "≥": ">=", "≈": "~", "√": "sqrt", "→": "->",
+};
+const spellOut = (text: string) => text.replace(/[φΩδστλκπψ≤≥≈√→]/gu, (c) => SPELLED[c] ?? c);
+
+/** Demand or capacity in the report's units; the design package reports SI with a unit name. */
+function checkValue(u: UnitSystem, unit: string, si: number): string {
+  switch (unit) {
+    case "N·m":
+      return formatQuantity(u, "moment", si, 2);
+    case "N":
+      return formatQuantity(u, "force", si, 2);
+    case "m":
+      return formatQuantity(u, "deflection", si, 2);
+    case "Pa":
+      return `${formatNumber(si / STRESS[u].toSI, 1)} ${STRESS[u].label}`;
+    default:
+      return `${formatNumber(si, 3)} ${unit}`;
+  }
+}
+
+/**
+ * "Member checks": one row per span, case and check with clause, demand, capacity, utilisation
+ * and result; then each distinct formula with its source, the notes, the code editions used and
+ * the design caution.
+ */
+export function drawMemberChecks(doc: Doc, checks: MemberChecksInput, u: UnitSystem): void {
+  heading(doc, "Member checks");
+  if (checks.basis) paragraph(doc, `Section and material: ${checks.basis}.`);
+  paragraph(doc, checks.caution);
+  const columns = columnsByWeight([
+    ["Span", 0.5], ["Case", 0.8], ["Check", 3], ["Clause", 3.3], ["Demand", 1.35, "right"], ["Capacity", 1.35, "right"],
+    ["Util.", 0.75, "right"], ["Result", 0.75],
+  ]);
+  // Table cells do not wrap: a long title or clause is shortened here and given in full under "Check formulas".
+  doc.font(FONT.regular).fontSize(7.5);
+  const fit = (text: string, width: number) => {
+    if (doc.widthOfString(pdfSafe(text)) <= width - 8) return text;
+    let cut = text;
+    while (cut.length > 1 && doc.widthOfString(pdfSafe(`${cut}...`)) > width - 8) cut = cut.slice(0, -1);
+    return `${cut.trimEnd()}...`;
+  };
+  drawTable(doc, {
+    columns,
+    rows: checks.rows.map(({ span, caseId, check }) =>
+      (check.status === "not-covered"
+        ? [span, caseId, check.title, check.source, "", "", "", "not covered"]
+        : [span, caseId, check.title, check.source, checkValue(u, check.unit, check.demand), checkValue(u, check.unit, check.capacity),
+          formatNumber(check.utilisation, 3), check.pass ? "pass" : "FAIL"]
+      ).map((cell, j) => fit(spellOut(cell), columns[j]?.width ?? CONTENT_WIDTH)),
+    ),
+    highlight: (i) => checks.rows[i]?.check.pass === false,
+  });
+  const formulas = new Map<string, string>();
+  const notes = new Set<string>();
+  for (const { check } of checks.rows) {
+    formulas.set(`${check.title}: ${check.formula}`, check.source);
+    for (const n of check.notes) notes.add(n);
+    if (check.status === "not-covered") notes.add(`${check.title}: not covered, ${check.reason}`);
+  }
+  heading(doc, "Check formulas");
+  for (const [formula, source] of formulas) paragraph(doc, spellOut(`${formula} (${source})`));
+  if (notes.size > 0) paragraph(doc, spellOut(`Notes: ${[...notes].join("; ")}.`));
+  heading(doc, "Code editions used");
+  for (const e of checks.codeEditions) paragraph(doc, `${e.id}, ${e.title}: ${e.usedFor}.`);
 }
