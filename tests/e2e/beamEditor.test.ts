@@ -13,7 +13,7 @@ import {
   typeQuantity,
   waitForEditor,
 } from "./editorPage";
-import { expectStatus, flowTimeoutMs, signInThroughForm, uiTimeoutMs, startE2e, type E2eEnvironment, type SeededUser } from "./harness";
+import { expectStatus, flowTimeoutMs, setupTimeoutMs, signInThroughForm, uiTimeoutMs, startE2e, type E2eEnvironment, type SeededUser } from "./harness";
 
 // Issues 4 and 7, real-browser suite: the viewer's read-only view, a save conflict from two tabs,
 // and modelling a beam with mouse and keyboard, saved and found again after a reload.
@@ -43,10 +43,10 @@ beforeAll(async () => {
     201,
     "invite viewer",
   );
-});
+}, setupTimeoutMs);
 afterAll(async () => {
   await env?.close();
-});
+}, setupTimeoutMs);
 
 describe("the beam editor in a real browser", () => {
   it(

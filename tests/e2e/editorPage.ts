@@ -43,8 +43,10 @@ export async function clickOnBeam(page: Page, fraction: number): Promise<void> {
 }
 
 export async function openTableTab(page: Page, name: "Nodes" | "Segments" | "Loads" | "Load cases" | "Combinations"): Promise<Locator> {
-  await page.getByRole("tab", { name }).click();
-  const panel = page.getByRole("tabpanel");
+  // Scoped to the "Tables" region: the results panel has tabs of its own.
+  const tables = page.getByRole("region", { name: "Tables" });
+  await tables.getByRole("tab", { name, exact: true }).click();
+  const panel = tables.getByRole("tabpanel", { name, exact: true });
   await panel.getByRole("table").or(panel.getByText("Add a load case")).first().waitFor();
   return panel;
 }

@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { twoSpanModel } from "@spanwright/api/testing";
 import { beamPath, openTableTab, saveButtonOf, saveStateOf, typeQuantity, waitForEditor } from "./editorPage";
-import { expectStatus, flowTimeoutMs, signInThroughForm, startE2e, type E2eEnvironment, type SeededUser } from "./harness";
+import { expectStatus, flowTimeoutMs, setupTimeoutMs, signInThroughForm, startE2e, type E2eEnvironment, type SeededUser } from "./harness";
 
 // Issue 5, real-browser flow: a changed load makes an issued reaction table outdated; the engineer
 // compares, re-issues, and the e-mail (CSV and PDF attached) is in the local outbox.
@@ -38,10 +38,10 @@ beforeAll(async () => {
     201,
     "issue r1",
   );
-});
+}, setupTimeoutMs);
 afterAll(async () => {
   await env?.close();
-});
+}, setupTimeoutMs);
 
 describe("the hand-off in a real browser", () => {
   it(

@@ -33,6 +33,8 @@ const chromiumArgs = [
 /** Generous waits: the machine is small and shared, and the first editor paint loads Konva and the engine. */
 export const uiTimeoutMs = 30_000;
 export const flowTimeoutMs = 150_000;
+/** Start (database copy, server, Chromium, seeding with argon2 sign-ups) and stop of one file. */
+export const setupTimeoutMs = 120_000;
 
 export interface SeededUser {
   userId: string;

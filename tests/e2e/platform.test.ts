@@ -1,16 +1,16 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { uniqueEmail } from "@spanwright/api/testing";
-import { flowTimeoutMs, startE2e, type E2eEnvironment } from "./harness";
+import { flowTimeoutMs, setupTimeoutMs, startE2e, type E2eEnvironment } from "./harness";
 
 // Issue 7, real-browser suite: sign-up, sign-in, a project, an invitation with a role, sign-out,
 // all through the production build in Chromium.
 let env: E2eEnvironment;
 beforeAll(async () => {
   env = await startE2e("platform");
-});
+}, setupTimeoutMs);
 afterAll(async () => {
   await env?.close();
-});
+}, setupTimeoutMs);
 
 describe("the platform in a real browser", () => {
   it(
