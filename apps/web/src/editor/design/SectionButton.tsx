@@ -35,8 +35,12 @@ function SectionDialog({ segmentId, number, onClose }: { segmentId: SegmentId; n
   const current = doc.segments.find((g) => g.id === segmentId)?.section;
   const [shape, setShape] = useState<SectionShape>(current?.shape ?? DEFAULT_SHAPES["i-shape"]);
   const [material, setMaterial] = useState<Material>(current?.material ?? findMaterialPreset("steel-a992") ?? MATERIAL_PRESETS[0]!);
+  const [problem, setProblem] = useState<string | null>(null);
+  // Refusals show here: the editor's notice bar sits behind the dialog.
   const apply = (segmentIds: readonly SegmentId[]) => {
-    if (store.run((d) => setSegmentSection(d, { segmentIds, shape, material }))) onClose();
+    const result = setSegmentSection(store.doc, { segmentIds, shape, material });
+    if (!result.ok) return setProblem(result.error.message);
+    if (store.run(() => result)) onClose();
   };
   return (
     <EditorDialog title={`Section and material: segment ${number}`} onClose={onClose}>
@@ -47,6 +51,7 @@ function SectionDialog({ segmentId, number, onClose }: { segmentId: SegmentId; n
           Sets E, I (and A, G, κ where the material has G) of the segment. The revision saves those values; the shape and material
           themselves stay with this editing session only.
         </p>
+        {problem && <p role="alert" className="text-sm font-medium text-danger-700">{problem}</p>}
         <div className="flex flex-wrap justify-end gap-2">
           <Button variant="secondary" onClick={() => apply(doc.segments.map((g) => g.id))}>Apply to all {doc.segments.length} segments</Button>
           <Button variant="primary" onClick={() => apply([segmentId])}>Apply to segment {number}</Button>
