@@ -102,7 +102,7 @@ function createApiRouter(deps: AppDeps, services: Services): Router {
   // compare first: "…/revisions/compare" must not be read as a version
   registerReactionRoutes(router, services.reactions);
   registerRevisionRoutes(router, services.revisions);
-  registerExportRoutes(router, database.db);
+  registerExportRoutes(router, database.db, services.sections);
   registerHandoffRoutes(router, services.handoffs);
   registerOutboxRoutes(router, { db: database.db, mailer: services.mailer, enabled: config.outboxEnabled });
   return router;

@@ -62,6 +62,13 @@ export type SectionListResponse = z.infer<typeof sectionListResponseSchema>;
 export const sectionResponseSchema = z.object({ section: projectSectionSchema });
 export type SectionResponse = z.infer<typeof sectionResponseSchema>;
 
-/** `?sectionId=` of the calculation report: the project section whose member checks it prints. */
-export const reportQuerySchema = z.object({ sectionId: sectionIdSchema.optional() });
+/**
+ * Query of the calculation report: `sectionId` names the project section whose member checks it
+ * prints (none: no checks, since revisions do not store sections); `method` says how the model's
+ * combinations are read (AISC 360-22 §B3: LRFD or ASD).
+ */
+export const reportQuerySchema = z.object({
+  sectionId: sectionIdSchema.optional(),
+  method: z.enum(["LRFD", "ASD"]).default("LRFD"),
+});
 export type ReportQuery = z.infer<typeof reportQuerySchema>;

@@ -1,4 +1,4 @@
-import { apiRoutes, reactionCsvQuerySchema } from "@spanwright/contracts";
+import { apiRoutes, reactionCsvQuerySchema, reportQuerySchema } from "@spanwright/contracts";
 import type { Response, Router } from "express";
 import { parseId } from "../access/access.js";
 import { requireAuth } from "../auth/sessionCookie.js";
@@ -6,6 +6,8 @@ import type { Db } from "../db/client.js";
 import { parseRequest } from "../http/validate.js";
 import { loadRevisionContext } from "../revisions/revisionContext.js";
 import { parseVersion } from "../revisions/revisions.routes.js";
+import type { SectionsService } from "../sections/sections.service.js";
+import { memberChecks } from "./memberChecks.js";
 import { revisionCsv, revisionPdf, type RevisionFile } from "./revisionFiles.js";
 
 function sendAttachment(res: Response, file: RevisionFile): void {
@@ -17,7 +19,7 @@ function sendAttachment(res: Response, file: RevisionFile): void {
 }
 
 /** CSV and PDF downloads of one revision (members read). */
-export function registerExportRoutes(router: Router, db: Db): void {
+export function registerExportRoutes(router: Router, db: Db, sections: SectionsService): void {
   const idsOf = (params: Record<string, string | undefined>) => ({
     projectId: parseId(params.projectId, "project"),
     beamId: parseId(params.beamId, "beam"),
@@ -34,6 +36,9 @@ export function registerExportRoutes(router: Router, db: Db): void {
   router.get(apiRoutes.getReportPdf.path, async (req, res) => {
     const { user } = requireAuth(res);
     const ids = idsOf(req.params);
-    sendAttachment(res, await revisionPdf(await loadRevisionContext(db, user.id, ids)));
+    const query = parseRequest(reportQuerySchema, req.query, "query");
+    const ctx = await loadRevisionContext(db, user.id, ids);
+    const section = query.sectionId ? await sections.get(user.id, ids.projectId, query.sectionId) : null;
+    sendAttachment(res, await revisionPdf(ctx, section ? memberChecks(ctx.model, section, query.method) : undefined));
   });
 }

@@ -108,3 +108,34 @@ describe("calculation report PDF", () => {
     expect((await viewer.client.get(`${revisions}/5/report.pdf`)).status).toBe(404);
   });
 });
+
+describe("calculation report PDF with member checks", () => {
+  const iShape = { kind: "i-shape", d: 0.3, bf: 0.15, tf: 0.01, tw: 0.006 };
+  const steel = { id: "s", name: "Steel (demo)", kind: "steel", E: 200e9, Fy: 345e6, typical: true, note: "typical values, confirm for your project", source: "demo" };
+
+  it("prints the checks of the project section named by ?sectionId, with the code editions", async () => {
+    const { engineer, viewer, projectPath, revisions } = await teamProject(t);
+    const { section } = (await engineer.client.post(`${projectPath}/sections`, { name: "I-300 demo", shape: iShape, material: steel })).body;
+    const res = await viewer.client.get(`${revisions}/1/report.pdf?sectionId=${section.id}`).buffer(true).parse(binary);
+    expect(res.status).toBe(200);
+    const all = (await extractPdfText(res.body as Buffer)).join("\n").replace(/[ \t]+/g, " ");
+    expect(all).toContain("Member checks");
+    expect(all).toContain("I-300 demo (i-shape, depth 300 mm), Steel (demo)");
+    expect(all).toContain("AISC 360-22 LRFD");
+    expect(all).toContain("Code editions used");
+    // C1 = 1.2·10 + 1.6·5 = 20 kN/m over two 5 m spans: M_B = wL²/8 = 62.5 kN·m in each span's F2
+    // row (continuous-beam coefficients, AISC Manual Table 3-23 case 29, from memory)
+    expect(all.match(/^[12] C1 .*62\.50 kN·m .* pass$/gm)).toHaveLength(2);
+  });
+
+  it("has no checks without a section, and answers 404 for another project's section", async () => {
+    const a = await teamProject(t);
+    const b = await teamProject(t);
+    const { section } = (await b.engineer.client.post(`${b.projectPath}/sections`, { name: "Elsewhere", shape: iShape, material: steel })).body;
+    const plain = await a.viewer.client.get(`${a.revisions}/1/report.pdf`).buffer(true).parse(binary);
+    expect((await extractPdfText(plain.body as Buffer)).join(" ")).not.toContain("Member checks");
+    const foreign = await a.viewer.client.get(`${a.revisions}/1/report.pdf?sectionId=${section.id}`);
+    expect(foreign.status).toBe(404);
+    expect((await a.viewer.client.get(`${a.revisions}/1/report.pdf?sectionId=nope`)).status).toBe(400);
+  });
+});

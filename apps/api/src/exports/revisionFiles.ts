@@ -6,6 +6,7 @@ import {
   renderCalculationReport,
 } from "@spanwright/handoff";
 import type { RevisionContext } from "../revisions/revisionContext.js";
+import type { MemberChecks } from "./memberChecks.js";
 
 export interface RevisionFile {
   filename: string;
@@ -26,8 +27,11 @@ export function revisionCsv(ctx: RevisionContext, units: CsvUnits): RevisionFile
   };
 }
 
-/** The calculation report. Dated with the revision's time, so the same revision gives the same bytes. */
-export async function revisionPdf(ctx: RevisionContext): Promise<RevisionFile> {
+/**
+ * The calculation report. Dated with the revision's time, so the same revision (and section) gives
+ * the same bytes. With `checks`, it adds the member checks of a project section.
+ */
+export async function revisionPdf(ctx: RevisionContext, checks?: MemberChecks): Promise<RevisionFile> {
   const content = await renderCalculationReport({
     project: ctx.project.name,
     beam: ctx.beam.name,
@@ -38,6 +42,7 @@ export async function revisionPdf(ctx: RevisionContext): Promise<RevisionFile> {
     units: ctx.project.unitSystem,
     model: ctx.model,
     result: ctx.result,
+    ...(checks ? { checks: checks.rows, checksBasis: checks.basis } : {}),
   });
   return {
     filename: exportFileName(ctx.beam.name, ctx.revision.version, "report.pdf"),
