@@ -18,10 +18,12 @@ export interface DiagramsStageProps {
   readonly onHover: (x: number | null) => void;
   /** A click picks x for the section view. */
   readonly onPick?: (x: number) => void;
+  /** Where the section view is, m; drawn as a solid line. */
+  readonly pickedX?: number | null;
 }
 
 /** V, M, deflection and rotation stacked under the beam, on the canvas's camera. */
-export function DiagramsStage({ analysis, name, isEnvelope, camera, width, units, hoverX, onHover, onPick }: DiagramsStageProps) {
+export function DiagramsStage({ analysis, name, isEnvelope, camera, width, units, hoverX, onHover, onPick, pickedX = null }: DiagramsStageProps) {
   const series = useMemo(() => quantities.map((q) => seriesFor(analysis, name, isEnvelope, q)), [analysis, name, isEnvelope]);
   const height = ROW_HEIGHT * quantities.length;
   return (
@@ -37,6 +39,7 @@ export function DiagramsStage({ analysis, name, isEnvelope, camera, width, units
         ))}
       </Layer>
       <Layer listening={false}>
+        {pickedX !== null && <Line points={[worldToScreenX(camera, pickedX), 0, worldToScreenX(camera, pickedX), height]} stroke="#9c6d1f" strokeWidth={1.5} />}
         {hoverX !== null && <Line points={[worldToScreenX(camera, hoverX), 0, worldToScreenX(camera, hoverX), height]} stroke="#8198bd" strokeWidth={1} dash={[3, 3]} />}
       </Layer>
     </Stage>

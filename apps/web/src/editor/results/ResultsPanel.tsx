@@ -67,7 +67,7 @@ export function ResultsPanel({ state }: { state: AnalysisState }) {
           <div className="grid grid-cols-1 gap-3 xl:grid-cols-[1fr_20rem]">
             <div ref={container} className="min-w-0 overflow-hidden rounded-md border border-paper-300">
               {state.status === "ready" && name ? (
-                <DiagramsStage analysis={state.analysis} name={name} isEnvelope={isEnvelope} camera={camera} width={width} units={doc.units} hoverX={hoverX} onHover={(x) => store.setUi({ hoverX: x })} onPick={(x) => store.setUi({ sectionX: x })} />
+                <DiagramsStage analysis={state.analysis} name={name} isEnvelope={isEnvelope} camera={camera} width={width} units={doc.units} hoverX={hoverX} onHover={(x) => store.setUi({ hoverX: x })} onPick={(x) => store.setUi({ sectionX: x })} pickedX={sectionX} />
               ) : (
                 <p className="p-4 text-sm text-paper-600">{state.status === "solving" ? "Solving…" : name ? "No diagrams until the model solves." : "Add a load case to see results."}</p>
               )}
