@@ -1,5 +1,6 @@
-import { and, eq, isNull, ne } from "drizzle-orm";
+import { and, eq, isNull, ne, sql } from "drizzle-orm";
 import type { Db } from "../db/client.js";
+import { preparedQuery } from "../db/preparedQuery.js";
 import { sessions, users } from "../db/schema.js";
 
 export interface UserRecord {
@@ -59,18 +60,24 @@ export async function insertSession(db: Db, session: SessionRecord): Promise<voi
   await db.insert(sessions).values(session);
 }
 
-export async function findSessionWithUser(
-  db: Db,
-  sessionId: string,
-): Promise<{ session: SessionRecord; user: UserRecord } | null> {
-  const [row] = await db
+/** Run on every request with a session cookie: one indexed lookup, built once. */
+const sessionWithUserQuery = preparedQuery((db) =>
+  db
     .select({
       session: { id: sessions.id, userId: sessions.userId, expiresAt: sessions.expiresAt },
       user: userColumns,
     })
     .from(sessions)
     .innerJoin(users, eq(users.id, sessions.userId))
-    .where(eq(sessions.id, sessionId));
+    .where(eq(sessions.id, sql.placeholder("sessionId")))
+    .prepare("find_session_with_user"),
+);
+
+export async function findSessionWithUser(
+  db: Db,
+  sessionId: string,
+): Promise<{ session: SessionRecord; user: UserRecord } | null> {
+  const [row] = await sessionWithUserQuery(db).execute({ sessionId });
   return row ?? null;
 }
 
