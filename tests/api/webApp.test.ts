@@ -38,4 +38,17 @@ describe("the built web app, served by the API on one port", () => {
     expect(res.status).toBe(404);
     expect(res.body.error.code).toBe("not-found");
   });
+
+  it("serves hashed assets gzip-compressed and cached for a year, index.html revalidated every time", async () => {
+    const html = await t.client().get("/").set("Accept-Encoding", "gzip");
+    expect(html.headers["cache-control"]).toBe("no-cache");
+    const script = /<script[^>]+src="(\/assets\/[^"]+\.js)"/.exec(html.text)?.[1];
+    expect(script).toBeDefined();
+    const res = await t.client().get(script!).set("Accept-Encoding", "gzip");
+    expect(res.status).toBe(200);
+    expect(res.headers["content-encoding"]).toBe("gzip");
+    expect(res.headers["cache-control"]).toBe("public, max-age=31536000, immutable");
+    const fallback = await t.client().get("/projects/x/beams/y");
+    expect(fallback.headers["cache-control"]).toBe("no-cache");
+  });
 });

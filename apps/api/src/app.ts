@@ -3,8 +3,6 @@ import express, { type Express, type RequestHandler, Router } from "express";
 import { rateLimit } from "express-rate-limit";
 import helmet from "helmet";
 import { randomUUID } from "node:crypto";
-import fs from "node:fs";
-import path from "node:path";
 import { pino, type Logger } from "pino";
 import { pinoHttp } from "pino-http";
 import { apiLimits } from "@spanwright/contracts";
@@ -38,6 +36,7 @@ import { createReactionsService } from "./revisions/reactions.service.js";
 import { registerRevisionRoutes } from "./revisions/revisions.routes.js";
 import { createRevisionsService } from "./revisions/revisions.service.js";
 import type { Engine } from "./solve/engine.js";
+import { compressResponses, serveWebApp } from "./webApp.js";
 import { registerSolveRoutes } from "./solve/solve.routes.js";
 
 export interface AppDeps {
@@ -108,17 +107,6 @@ function createApiRouter(deps: AppDeps, services: Services): Router {
   return router;
 }
 
-/** The built web app with a fallback to index.html for client-side routes (GET outside /api). */
-function serveWebApp(app: Express, distDir: string): void {
-  const indexHtml = path.join(distDir, "index.html");
-  app.use(express.static(distDir, { index: false, maxAge: "1h" }));
-  app.use((req, res, next) => {
-    if ((req.method !== "GET" && req.method !== "HEAD") || req.path === "/api" || req.path.startsWith("/api/")) return next();
-    if (!fs.existsSync(indexHtml)) return next();
-    res.sendFile(indexHtml);
-  });
-}
-
 /** The Express app, without listening: tests drive it through supertest. */
 export function createApp(deps: AppDeps): { app: Express; services: Services; apiRouter: Router } {
   const { config } = deps;
@@ -131,6 +119,7 @@ export function createApp(deps: AppDeps): { app: Express; services: Services; ap
   app.disable("x-powered-by");
   app.set("trust proxy", config.trustProxy);
   // no upgrade-insecure-requests: the product is served over plain http on 127.0.0.1 by default
+  app.use(compressResponses);
   app.use(helmet({ contentSecurityPolicy: { directives: { upgradeInsecureRequests: null } } }));
   app.use(
     pinoHttp({
