@@ -1,4 +1,4 @@
-import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { useMutation, useQuery, useQueryClient, type QueryClient } from "@tanstack/react-query";
 import {
   meResponseSchema,
   routePath,
@@ -20,12 +20,22 @@ export async function fetchMe(signal?: AbortSignal): Promise<User | null> {
   }
 }
 
+const ME_STALE_MS = 60_000;
+
 export function useMe() {
   return useQuery({
     queryKey: queryKeys.me,
     queryFn: ({ signal }) => fetchMe(signal),
-    staleTime: 60_000,
+    staleTime: ME_STALE_MS,
   });
+}
+
+/**
+ * Starts GET /api/me at app start, so it runs while the router downloads the page's chunk instead
+ * of after it (the auth guard then finds the answer in the cache). Errors stay in the query.
+ */
+export function prefetchMe(queryClient: QueryClient): void {
+  void queryClient.prefetchQuery({ queryKey: queryKeys.me, queryFn: ({ signal }) => fetchMe(signal), staleTime: ME_STALE_MS });
 }
 
 export function useSignIn() {
