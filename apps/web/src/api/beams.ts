@@ -1,4 +1,4 @@
-import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { queryOptions, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import {
   beamListResponseSchema,
   beamResponseSchema,
@@ -22,9 +22,9 @@ export function useBeams(projectId: string) {
   });
 }
 
-/** The beam with its latest revision (model and result). */
-export function useBeam(projectId: string, beamId: string) {
-  return useQuery({
+/** One query definition for the hook and for prefetching at app start. */
+export function beamQueryOptions(projectId: string, beamId: string) {
+  return queryOptions({
     queryKey: queryKeys.beam(projectId, beamId),
     queryFn: ({ signal }) =>
       request(routePath("getBeam", { projectId, beamId }), {
@@ -32,6 +32,11 @@ export function useBeam(projectId: string, beamId: string) {
         parse: (d) => beamResponseSchema.parse(d),
       }),
   });
+}
+
+/** The beam with its latest revision (model and result). */
+export function useBeam(projectId: string, beamId: string) {
+  return useQuery(beamQueryOptions(projectId, beamId));
 }
 
 export function useCreateBeam(projectId: string) {

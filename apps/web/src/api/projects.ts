@@ -1,4 +1,4 @@
-import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { queryOptions, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import {
   projectListResponseSchema,
   projectResponseSchema,
@@ -23,8 +23,9 @@ export function useProjects() {
   });
 }
 
-export function useProject(projectId: string) {
-  return useQuery({
+/** One query definition for the hook and for prefetching at app start. */
+export function projectQueryOptions(projectId: string) {
+  return queryOptions({
     queryKey: queryKeys.project(projectId),
     queryFn: async ({ signal }) => {
       const body = await request(routePath("getProject", { projectId }), {
@@ -34,6 +35,10 @@ export function useProject(projectId: string) {
       return body.project;
     },
   });
+}
+
+export function useProject(projectId: string) {
+  return useQuery(projectQueryOptions(projectId));
 }
 
 export function useCreateProject() {
