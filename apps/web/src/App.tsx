@@ -14,9 +14,9 @@ const EDITOR_PATH = "/projects/:projectId/beams/:beamId";
  * Requests the first screen needs, started before the router loads the page's chunk so the two
  * run at the same time: the user always, and the beam and project when the URL opens the editor.
  */
-function prefetchStartData(client: QueryClient): void {
+export function prefetchStartData(client: QueryClient, pathname: string): void {
   prefetchMe(client);
-  const editor = matchPath(EDITOR_PATH, window.location.pathname);
+  const editor = matchPath(EDITOR_PATH, pathname);
   const { projectId, beamId } = editor?.params ?? {};
   if (projectId && beamId) {
     void client.prefetchQuery(beamQueryOptions(projectId, beamId));
@@ -27,7 +27,7 @@ function prefetchStartData(client: QueryClient): void {
 export function App() {
   const [queryClient] = useState(() => {
     const client = createQueryClient();
-    prefetchStartData(client);
+    prefetchStartData(client, window.location.pathname);
     return client;
   });
   const [router] = useState(createAppRouter);
