@@ -225,7 +225,7 @@ describe("the beam editor in a real browser", () => {
     flowTimeoutMs,
   );
 
-  it.skip(
+  it(
     // The editor ignores the role: EditorWorkspace, Palette and the tables (apps/web/src/editor) take no
     // canEdit, so a viewer gets enabled tools and cells; only "Save revision" is disabled.
     "disables the palette's editing tools and the table cells for a viewer",

@@ -12,6 +12,15 @@ import type { EditorAction } from "./EditorAction";
 const always = () => true;
 const selectionKind = (s: EditorState) => s.ui.selection?.kind;
 
+/** The one role check of the editor: viewers and checkers read the beam but change nothing. */
+export const canEditBeam = (s: EditorState): boolean => s.ui.canEdit;
+
+/** An action that changes the beam: enabled only when the role may edit and its own predicate holds. */
+function editing(action: EditorAction): EditorAction {
+  const own = action.isEnabled;
+  return { ...action, isEnabled: (s) => canEditBeam(s) && own(s) };
+}
+
 function fit(store: EditorStore): void {
   const { doc } = store;
   const { viewportWidth } = store.getState().ui;
@@ -59,13 +68,15 @@ function uniqueName(store: EditorStore, prefix: string): string {
   for (let i = 1; ; i++) if (!taken.has(`${prefix}${i}`)) return `${prefix}${i}`;
 }
 
+/** Select and pan only look; every other tool places or splits, so it needs edit rights. */
 function toolAction(id: string, label: string, key: string, tool: EditorState["ui"]["tool"], options?: Partial<ToolOptions>): EditorAction {
+  const onlyLooks = tool === "select" || tool === "pan";
   return {
     id,
     label,
     group: "tool",
     shortcuts: [{ key }],
-    isEnabled: always,
+    isEnabled: onlyLooks ? always : canEditBeam,
     run: (store) => store.updateUi((ui) => ({ tool, toolOptions: { ...ui.toolOptions, ...options } })),
   };
 }
@@ -74,27 +85,27 @@ const supportTool = (type: SupportType, label: string, key: string) =>
   toolAction(`tool-support-${type}`, `Place ${label} support`, key, "place-support", { supportType: type });
 
 export const editorActions: readonly EditorAction[] = [
-  { id: "undo", label: "Undo", group: "edit", shortcuts: [{ key: "z", mod: true }], isEnabled: (s) => canUndo(s.history), run: (st) => st.undo() },
-  {
+  editing({ id: "undo", label: "Undo", group: "edit", shortcuts: [{ key: "z", mod: true }], isEnabled: (s) => canUndo(s.history), run: (st) => st.undo() }),
+  editing({
     id: "redo",
     label: "Redo",
     group: "edit",
     shortcuts: [{ key: "z", mod: true, shift: true }, { key: "y", mod: true }],
     isEnabled: (s) => canRedo(s.history),
     run: (st) => st.redo(),
-  },
-  {
+  }),
+  editing({
     id: "delete",
     label: "Delete selected",
     group: "edit",
     shortcuts: [{ key: "Delete" }, { key: "Backspace" }],
     isEnabled: (s) => !!selectionKind(s) && selectionKind(s) !== "segment",
     run: deleteSelection,
-  },
-  { id: "nudge-left", label: "Move selected left one grid step", group: "edit", shortcuts: [{ key: "ArrowLeft", shift: false }], isEnabled: (s) => selectionKind(s) === "node" || selectionKind(s) === "load", run: (st) => nudge(st, -1) },
-  { id: "nudge-right", label: "Move selected right one grid step", group: "edit", shortcuts: [{ key: "ArrowRight", shift: false }], isEnabled: (s) => selectionKind(s) === "node" || selectionKind(s) === "load", run: (st) => nudge(st, 1) },
-  { id: "nudge-left-10", label: "Move selected left ten grid steps", group: "edit", shortcuts: [{ key: "ArrowLeft", shift: true }], isEnabled: (s) => selectionKind(s) === "node" || selectionKind(s) === "load", run: (st) => nudge(st, -10) },
-  { id: "nudge-right-10", label: "Move selected right ten grid steps", group: "edit", shortcuts: [{ key: "ArrowRight", shift: true }], isEnabled: (s) => selectionKind(s) === "node" || selectionKind(s) === "load", run: (st) => nudge(st, 10) },
+  }),
+  editing({ id: "nudge-left", label: "Move selected left one grid step", group: "edit", shortcuts: [{ key: "ArrowLeft", shift: false }], isEnabled: (s) => selectionKind(s) === "node" || selectionKind(s) === "load", run: (st) => nudge(st, -1) }),
+  editing({ id: "nudge-right", label: "Move selected right one grid step", group: "edit", shortcuts: [{ key: "ArrowRight", shift: false }], isEnabled: (s) => selectionKind(s) === "node" || selectionKind(s) === "load", run: (st) => nudge(st, 1) }),
+  editing({ id: "nudge-left-10", label: "Move selected left ten grid steps", group: "edit", shortcuts: [{ key: "ArrowLeft", shift: true }], isEnabled: (s) => selectionKind(s) === "node" || selectionKind(s) === "load", run: (st) => nudge(st, -10) }),
+  editing({ id: "nudge-right-10", label: "Move selected right ten grid steps", group: "edit", shortcuts: [{ key: "ArrowRight", shift: true }], isEnabled: (s) => selectionKind(s) === "node" || selectionKind(s) === "load", run: (st) => nudge(st, 10) }),
   {
     id: "escape",
     label: "Back to select, clear the selection",
@@ -114,7 +125,7 @@ export const editorActions: readonly EditorAction[] = [
   toolAction("tool-distributed-load", "Place distributed load", "u", "place-load", { loadType: "distributed" }),
   toolAction("tool-moment", "Place applied moment", "m", "place-load", { loadType: "moment" }),
   toolAction("tool-split", "Split a span", "s", "split"),
-  {
+  editing({
     id: "add-span",
     label: "Add span at right end",
     group: "beam",
@@ -125,8 +136,8 @@ export const editorActions: readonly EditorAction[] = [
       const last = n.length >= 2 ? n[n.length - 1]!.x - n[n.length - 2]!.x : 6;
       if (store.run((d) => addSpan(d, { length: last }))) fit(store);
     },
-  },
-  {
+  }),
+  editing({
     id: "split-selected",
     label: "Split selected segment at its middle",
     group: "beam",
@@ -140,8 +151,8 @@ export const editorActions: readonly EditorAction[] = [
       const b = store.doc.nodes[i + 1]?.x ?? 0;
       store.run((d) => splitSpan(d, { segmentId: sel.id, x: snapToGrid((a + b) / 2, store.getState().ui.gridStep) }));
     },
-  },
-  {
+  }),
+  editing({
     id: "toggle-hinge",
     label: "Toggle hinge at selected node",
     group: "beam",
@@ -151,8 +162,8 @@ export const editorActions: readonly EditorAction[] = [
       const sel = store.getState().ui.selection;
       if (sel?.kind === "node") store.run((d) => toggleHinge(d, { nodeId: sel.id }));
     },
-  },
-  {
+  }),
+  editing({
     id: "add-load-case",
     label: "Add load case",
     group: "beam",
@@ -161,8 +172,8 @@ export const editorActions: readonly EditorAction[] = [
     run: (store) => {
       store.run((d) => addLoadCase(d, { name: uniqueName(store, "LC"), category: "other" }));
     },
-  },
-  {
+  }),
+  editing({
     id: "add-combination",
     label: "Add combination",
     group: "beam",
@@ -172,7 +183,7 @@ export const editorActions: readonly EditorAction[] = [
       const factors = store.doc.loadCases.map((c) => ({ caseId: c.id, factor: 1 }));
       store.run((d) => addCombination(d, { name: uniqueName(store, "C"), factors }));
     },
-  },
+  }),
   { id: "fit", label: "Fit beam to view", group: "view", shortcuts: [{ key: "0" }], isEnabled: always, run: fit },
   {
     id: "zoom-in",

@@ -3,13 +3,15 @@ import { CombinationGenerator } from "../../design";
 import { addCombinations } from "../commands/designCommands";
 import { useEditor, useEditorStore } from "../store/useEditor";
 import { EditorDialog } from "./EditorDialog";
+import { useCanEdit } from "../store/useCanEdit";
 
 /** "Generate from code…": code-preset combinations for the load cases present, added in one undo step. */
 export function GenerateCombinationsButton({ className }: { className?: string }) {
   const [open, setOpen] = useState(false);
+  const canEdit = useCanEdit();
   return (
     <>
-      <button type="button" className={className} onClick={() => setOpen(true)}>Generate from code…</button>
+      <button type="button" className={className} disabled={!canEdit} onClick={() => setOpen(true)}>Generate from code…</button>
       {open && <GenerateDialog onClose={() => setOpen(false)} />}
     </>
   );

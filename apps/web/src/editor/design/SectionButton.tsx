@@ -7,6 +7,7 @@ import { setSegmentSection } from "../commands/designCommands";
 import type { SegmentId } from "../model/ids";
 import { useEditor, useEditorStore } from "../store/useEditor";
 import { EditorDialog } from "./EditorDialog";
+import { useCanEdit } from "../store/useCanEdit";
 
 export interface SectionButtonProps {
   readonly segmentId: SegmentId;
@@ -36,6 +37,7 @@ function SectionDialog({ segmentId, number, onClose }: { segmentId: SegmentId; n
   const [shape, setShape] = useState<SectionShape>(current?.shape ?? DEFAULT_SHAPES["i-shape"]);
   const [material, setMaterial] = useState<Material>(current?.material ?? findMaterialPreset("steel-a992") ?? MATERIAL_PRESETS[0]!);
   const [problem, setProblem] = useState<string | null>(null);
+  const canEdit = useCanEdit();
   // Refusals show here: the editor's notice bar sits behind the dialog.
   const apply = (segmentIds: readonly SegmentId[]) => {
     const result = setSegmentSection(store.doc, { segmentIds, shape, material });
@@ -53,8 +55,8 @@ function SectionDialog({ segmentId, number, onClose }: { segmentId: SegmentId; n
         </p>
         {problem && <p role="alert" className="text-sm font-medium text-danger-700">{problem}</p>}
         <div className="flex flex-wrap justify-end gap-2">
-          <Button variant="secondary" onClick={() => apply(doc.segments.map((g) => g.id))}>Apply to all {doc.segments.length} segments</Button>
-          <Button variant="primary" onClick={() => apply([segmentId])}>Apply to segment {number}</Button>
+          <Button variant="secondary" disabled={!canEdit} onClick={() => apply(doc.segments.map((g) => g.id))}>Apply to all {doc.segments.length} segments</Button>
+          <Button variant="primary" disabled={!canEdit} onClick={() => apply([segmentId])}>Apply to segment {number}</Button>
         </div>
       </div>
     </EditorDialog>

@@ -5,6 +5,7 @@ import { setTheory } from "../commands/documentCommands";
 import { toExchange } from "../model/exchange";
 import { useEditor, useEditorStore } from "../store/useEditor";
 import { beamSection } from "./beamSection";
+import { useCanEdit } from "../store/useCanEdit";
 
 /** Beam settings: Euler-Bernoulli or Timoshenko (undoable), with the shear share per span. */
 export function TheorySettings() {
@@ -15,6 +16,7 @@ export function TheorySettings() {
     () => toExchange({ title: "", units: "si", nodes, segments, loadCases, combinations, theory, stations }),
     [nodes, segments, loadCases, combinations, theory, stations],
   );
+  const canEdit = useCanEdit();
   const chosen = beamSection(doc);
   const props = chosen ? sectionProperties(chosen.section.shape) : null;
   const G = chosen?.section.material.G;
@@ -26,7 +28,7 @@ export function TheorySettings() {
           model={model}
           theory={theory}
           units={doc.units}
-          onTheoryChange={(t) => store.run((d) => setTheory(d, { theory: t }))}
+          {...(canEdit ? { onTheoryChange: (t: typeof theory) => store.run((d) => setTheory(d, { theory: t })) } : {})}
           {...(props?.ok ? { depth: props.value.depth } : {})}
           fallback={{ ...(G !== undefined ? { G } : {}), shearArea: props?.ok ? props.value.shearArea : null }}
         />

@@ -16,13 +16,15 @@ export interface QuantityInputProps {
   readonly id?: string;
   /** Extra key handling (table navigation) after the field's own. */
   readonly onKeyDown?: (e: KeyboardEvent<HTMLInputElement>) => void;
+  /** Shown and focusable (so tables stay keyboard-navigable) but never committed. */
+  readonly readOnly?: boolean;
 }
 
 /**
  * A text field for one quantity in display units. Accepts any unit of the right dimension
  * ("6500 mm" in a metre field) and feet-inches; commits on Enter or blur, Escape reverts.
  */
-export function QuantityInput({ value, kind, units, onCommit, onClear, label, className, id, onKeyDown }: QuantityInputProps) {
+export function QuantityInput({ value, kind, units, onCommit, onClear, label, className, id, onKeyDown, readOnly = false }: QuantityInputProps) {
   const shown = value === undefined ? "" : formatEditable(value, units, kind);
   const [text, setText] = useState(shown);
   const [error, setError] = useState<string | null>(null);
@@ -32,7 +34,7 @@ export function QuantityInput({ value, kind, units, onCommit, onClear, label, cl
   }, [shown]);
 
   const commit = () => {
-    if (text === shown) return;
+    if (readOnly || text === shown) return;
     if (text.trim() === "" && onClear) {
       onClear();
       return;
@@ -55,9 +57,10 @@ export function QuantityInput({ value, kind, units, onCommit, onClear, label, cl
         aria-invalid={error !== null}
         title={error ?? undefined}
         className={`w-full min-w-0 rounded-sm border px-1.5 py-0.5 text-right font-mono text-sm tabular-nums focus:outline-2 focus:outline-ochre-400 ${
-          error ? "border-danger-600 bg-danger-50" : "border-paper-300 bg-white"
+          error ? "border-danger-600 bg-danger-50" : readOnly ? "border-paper-200 bg-paper-50" : "border-paper-300 bg-white"
         }`}
         value={text}
+        readOnly={readOnly}
         data-pending={text !== shown}
         onChange={(e) => setText(e.target.value)}
         onBlur={commit}

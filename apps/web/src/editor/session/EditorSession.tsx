@@ -36,8 +36,8 @@ export function EditorSession({ projectId, initial, units, canEdit }: EditorSess
   const [{ store, loadProblem }] = useState(() => {
     const r = importModel(initial.revision.model, units);
     return r.ok
-      ? { store: new EditorStore(r.doc), loadProblem: null }
-      : { store: new EditorStore(createTemplate("simple-span", units)), loadProblem: r.message };
+      ? { store: new EditorStore(r.doc, { canEdit }), loadProblem: null }
+      : { store: new EditorStore(createTemplate("simple-span", units), { canEdit }), loadProblem: r.message };
   });
   const [baseVersion, setBaseVersion] = useState(initial.revision.version);
   const [draft, setDraft] = useState<Draft | null>(() => {
@@ -55,6 +55,9 @@ export function EditorSession({ projectId, initial, units, canEdit }: EditorSess
   const blocker = useLeaveGuard(dirty && goTo === null);
   // Drafts wait until the user has answered the offer, so an old draft is not overwritten unseen.
   useDraftSync(key, history.doc, dirty, baseVersion, draft === null);
+
+  // The role can change on a project refetch; the store's flag drives every editing action.
+  useEffect(() => store.setUi({ canEdit }), [store, canEdit]);
 
   useEffect(() => {
     if (goTo && !dirty) navigate(goTo);

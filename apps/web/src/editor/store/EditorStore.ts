@@ -22,6 +22,11 @@ export interface EditorState {
 
 type Listener = () => void;
 
+export interface EditorStoreOptions {
+  /** false opens the beam read-only (viewer and checker roles); defaults to true. */
+  readonly canEdit?: boolean;
+}
+
 /**
  * The open beam and the editor's UI state behind one subscribe/getState pair (for
  * useSyncExternalStore). Every document change goes through `run`, which applies a command's
@@ -31,10 +36,10 @@ export class EditorStore {
   private state: EditorState;
   private readonly listeners = new Set<Listener>();
 
-  constructor(doc: BeamDocument) {
+  constructor(doc: BeamDocument, options: EditorStoreOptions = {}) {
     this.state = {
       history: createHistory(doc),
-      ui: createUiState(doc.loadCases[0]?.id ?? null, defaultGridStep[doc.units]),
+      ui: createUiState(doc.loadCases[0]?.id ?? null, defaultGridStep[doc.units], options.canEdit ?? true),
     };
   }
 

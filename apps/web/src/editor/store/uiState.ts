@@ -49,9 +49,11 @@ export interface UiState {
   readonly notice: Notice | null;
   /** A load being drawn by the place-load tool, shown on the interactive layer. */
   readonly preview: { readonly x1: number; readonly x2: number } | null;
+  /** Whether the user's role may change the beam (viewers and checkers may not): every editing action checks it. */
+  readonly canEdit: boolean;
 }
 
-export function createUiState(activeCaseId: CaseId | null, gridStep: number): UiState {
+export function createUiState(activeCaseId: CaseId | null, gridStep: number, canEdit = true): UiState {
   return {
     selection: null,
     camera: defaultCamera,
@@ -66,6 +68,7 @@ export function createUiState(activeCaseId: CaseId | null, gridStep: number): Ui
     sectionX: null,
     notice: null,
     preview: null,
+    canEdit,
   };
 }
 

@@ -5,12 +5,16 @@ import { useEditor, useEditorStore } from "../store/useEditor";
 import { findAction } from "../actions/editorActions";
 import { navigateGrid, tableClasses as c } from "./gridNavigation";
 import { GenerateCombinationsButton } from "../design/GenerateCombinationsButton";
+import { useCanEdit } from "../store/useCanEdit";
 
 /** Combinations as a grid of factors, one column per load case; an empty cell leaves the case out. */
 export function CombinationsTable() {
   const store = useEditorStore();
   const doc = useEditor((s) => s.history.doc);
   const selection = useEditor((s) => s.ui.selection);
+  const readOnly = !useCanEdit();
+  const addCombination = findAction("add-combination");
+  const canAdd = useEditor(addCombination.isEnabled);
   return (
     <div className="space-y-2">
       <table className={c.table} onKeyDown={navigateGrid}>
@@ -27,7 +31,7 @@ export function CombinationsTable() {
           {doc.combinations.map((k) => (
             <tr key={k.id} className={c.row(selection?.kind === "combination" && selection.id === k.id)} onFocus={() => store.setUi({ selection: { kind: "combination", id: k.id } })}>
               <td className={c.td}>
-                <TextInput label={`Combination ${k.name} name`} value={k.name} onCommit={(name) => store.run((d) => editCombination(d, { combinationId: k.id, name }))} />
+                <TextInput label={`Combination ${k.name} name`} value={k.name} readOnly={readOnly} onCommit={(name) => store.run((d) => editCombination(d, { combinationId: k.id, name }))} />
               </td>
               {doc.loadCases.map((lc) => (
                 <td key={lc.id} className={c.td}>
@@ -36,20 +40,21 @@ export function CombinationsTable() {
                     value={k.factors.find((f) => f.caseId === lc.id)?.factor}
                     kind="factor"
                     units={doc.units}
+                    readOnly={readOnly}
                     onCommit={(factor) => store.run((d) => setCombinationFactor(d, { combinationId: k.id, caseId: lc.id, factor }))}
                     onClear={() => store.run((d) => setCombinationFactor(d, { combinationId: k.id, caseId: lc.id, factor: null }))}
                   />
                 </td>
               ))}
               <td className={c.td}>
-                <button type="button" className={c.smallButton} aria-label={`Delete combination ${k.name}`} onClick={() => store.run((d) => deleteCombination(d, { combinationId: k.id }))}>Delete</button>
+                <button type="button" className={c.smallButton} aria-label={`Delete combination ${k.name}`} disabled={readOnly} onClick={() => store.run((d) => deleteCombination(d, { combinationId: k.id }))}>Delete</button>
               </td>
             </tr>
           ))}
         </tbody>
       </table>
       <div className="flex gap-2">
-        <button type="button" className={c.addButton} onClick={() => findAction("add-combination").run(store)}>+ Combination</button>
+        <button type="button" className={c.addButton} disabled={!canAdd} onClick={() => addCombination.run(store)}>+ Combination</button>
         <GenerateCombinationsButton className={c.addButton} />
       </div>
     </div>

@@ -5,6 +5,8 @@ import { QuantityInput } from "../fields/QuantityInput";
 import { useEditor, useEditorStore } from "../store/useEditor";
 import type { EditorStore } from "../store/EditorStore";
 import { navigateGrid, tableClasses as c } from "./gridNavigation";
+import { ChoiceInput } from "../fields/ChoiceInput";
+import { useCanEdit } from "../store/useCanEdit";
 
 const typeLabels: Record<LoadType, string> = { point: "Point", moment: "Moment", distributed: "Distributed", settlement: "Settlement" };
 
@@ -27,28 +29,34 @@ function starterLoad(doc: BeamDocument, type: LoadType): Load {
   }
 }
 
-function LoadRow({ load, index, store, doc, caseId }: { load: Load; index: number; store: EditorStore; doc: BeamDocument; caseId: CaseId }) {
+interface LoadRowProps {
+  readonly load: Load;
+  readonly index: number;
+  readonly store: EditorStore;
+  readonly doc: BeamDocument;
+  readonly caseId: CaseId;
+  readonly readOnly: boolean;
+}
+
+function LoadRow({ load, index, store, doc, caseId, readOnly }: LoadRowProps) {
   const units = doc.units;
   const edit = (next: Load) => store.run((d) => editLoad(d, { loadId: load.id, load: next }));
   const label = `Load ${index + 1}`;
   const position =
     load.type === "settlement" ? (
-      <select aria-label={`${label} node`} className={c.select} value={load.node} onChange={(e) => edit({ ...load, node: e.target.value as typeof load.node })}>
-        {doc.nodes.map((n, i) => (
-          <option key={n.id} value={n.id}>Node {i + 1}</option>
-        ))}
-      </select>
+      <ChoiceInput label={`${label} node`} className={c.select} value={load.node} readOnly={readOnly}
+        choices={doc.nodes.map((n, i) => ({ value: n.id, label: `Node ${i + 1}` }))} onChange={(node) => edit({ ...load, node })} />
     ) : (
-      <QuantityInput label={`${label} ${load.type === "distributed" ? "x1" : "x"}`} value={load.type === "distributed" ? load.x1 : load.x} kind="position" units={units}
+      <QuantityInput label={`${label} ${load.type === "distributed" ? "x1" : "x"}`} value={load.type === "distributed" ? load.x1 : load.x} kind="position" units={units} readOnly={readOnly}
         onCommit={(x) => edit(load.type === "distributed" ? { ...load, x1: x } : { ...load, x })} />
     );
-  const end = load.type === "distributed" ? <QuantityInput label={`${label} x2`} value={load.x2} kind="position" units={units} onCommit={(x2) => edit({ ...load, x2 })} /> : null;
+  const end = load.type === "distributed" ? <QuantityInput label={`${label} x2`} value={load.x2} kind="position" units={units} readOnly={readOnly} onCommit={(x2) => edit({ ...load, x2 })} /> : null;
   const value =
-    load.type === "point" ? <QuantityInput label={`${label} force`} value={load.fy} kind="force" units={units} onCommit={(fy) => edit({ ...load, fy })} />
-    : load.type === "moment" ? <QuantityInput label={`${label} moment`} value={load.mz} kind="moment" units={units} onCommit={(mz) => edit({ ...load, mz })} />
-    : load.type === "distributed" ? <QuantityInput label={`${label} intensity at x1`} value={load.qy1} kind="distributed" units={units} onCommit={(qy1) => edit({ ...load, qy1 })} />
-    : <QuantityInput label={`${label} settlement`} value={load.uy} kind="settlement" units={units} onCommit={(uy) => edit({ ...load, uy })} />;
-  const value2 = load.type === "distributed" ? <QuantityInput label={`${label} intensity at x2`} value={load.qy2} kind="distributed" units={units} onCommit={(qy2) => edit({ ...load, qy2 })} /> : null;
+    load.type === "point" ? <QuantityInput label={`${label} force`} value={load.fy} kind="force" units={units} readOnly={readOnly} onCommit={(fy) => edit({ ...load, fy })} />
+    : load.type === "moment" ? <QuantityInput label={`${label} moment`} value={load.mz} kind="moment" units={units} readOnly={readOnly} onCommit={(mz) => edit({ ...load, mz })} />
+    : load.type === "distributed" ? <QuantityInput label={`${label} intensity at x1`} value={load.qy1} kind="distributed" units={units} readOnly={readOnly} onCommit={(qy1) => edit({ ...load, qy1 })} />
+    : <QuantityInput label={`${label} settlement`} value={load.uy} kind="settlement" units={units} readOnly={readOnly} onCommit={(uy) => edit({ ...load, uy })} />;
+  const value2 = load.type === "distributed" ? <QuantityInput label={`${label} intensity at x2`} value={load.qy2} kind="distributed" units={units} readOnly={readOnly} onCommit={(qy2) => edit({ ...load, qy2 })} /> : null;
   return (
     <>
       <td className={c.td}>{typeLabels[load.type]}</td>
@@ -57,14 +65,12 @@ function LoadRow({ load, index, store, doc, caseId }: { load: Load; index: numbe
       <td className={c.td}>{value}</td>
       <td className={c.td}>{value2}</td>
       <td className={c.td}>
-        <select aria-label={`${label} load case`} className={c.select} value={caseId} onChange={(e) => store.run((d) => editLoad(d, { loadId: load.id, load, caseId: e.target.value as CaseId }))}>
-          {doc.loadCases.map((lc) => (
-            <option key={lc.id} value={lc.id}>{lc.name}</option>
-          ))}
-        </select>
+        <ChoiceInput label={`${label} load case`} className={c.select} value={caseId} readOnly={readOnly}
+          choices={doc.loadCases.map((lc) => ({ value: lc.id, label: lc.name }))}
+          onChange={(next) => store.run((d) => editLoad(d, { loadId: load.id, load, caseId: next }))} />
       </td>
       <td className={c.td}>
-        <button type="button" className={c.smallButton} aria-label={`Delete ${label.toLowerCase()}`} onClick={() => store.run((d) => deleteLoad(d, { loadId: load.id }))}>Delete</button>
+        <button type="button" className={c.smallButton} aria-label={`Delete ${label.toLowerCase()}`} disabled={readOnly} onClick={() => store.run((d) => deleteLoad(d, { loadId: load.id }))}>Delete</button>
       </td>
     </>
   );
@@ -76,6 +82,7 @@ export function LoadsTable() {
   const doc = useEditor((s) => s.history.doc);
   const activeCaseId = useEditor((s) => s.ui.activeCaseId);
   const selection = useEditor((s) => s.ui.selection);
+  const readOnly = !useCanEdit();
   const loadCase = doc.loadCases.find((lc) => lc.id === activeCaseId);
   if (!loadCase) return <p className="p-2 text-sm text-paper-600">Add a load case to enter loads.</p>;
   return (
@@ -90,7 +97,7 @@ export function LoadsTable() {
           </select>
         </label>
         {(["point", "distributed", "moment", "settlement"] as const).map((t) => (
-          <button key={t} type="button" className={c.addButton} onClick={() => {
+          <button key={t} type="button" className={c.addButton} disabled={readOnly} onClick={() => {
             const load = starterLoad(store.doc, t);
             if (store.run((d) => addLoad(d, { caseId: loadCase.id, load }))) store.setUi({ selection: { kind: "load", id: load.id } });
           }}>
@@ -114,7 +121,7 @@ export function LoadsTable() {
         <tbody>
           {loadCase.loads.map((l, i) => (
             <tr key={l.id} className={c.row(selection?.kind === "load" && selection.id === l.id)} onFocus={() => store.setUi({ selection: { kind: "load", id: l.id } })}>
-              <LoadRow load={l} index={i} store={store} doc={doc} caseId={loadCase.id} />
+              <LoadRow load={l} index={i} store={store} doc={doc} caseId={loadCase.id} readOnly={readOnly} />
             </tr>
           ))}
         </tbody>

@@ -6,6 +6,7 @@ import type { QuantityKind } from "../units/unitSystems";
 import { useEditor, useEditorStore } from "../store/useEditor";
 import { navigateGrid, tableClasses as c } from "./gridNavigation";
 import { SectionButton } from "../design/SectionButton";
+import { useCanEdit } from "../store/useCanEdit";
 
 const columns: readonly { key: keyof SectionProperties; label: string; kind: QuantityKind; optional: boolean }[] = [
   { key: "E", label: "E", kind: "modulus", optional: false },
@@ -22,6 +23,7 @@ export function SegmentsTable() {
   const selection = useEditor((s) => s.ui.selection);
   const gridStep = useEditor((s) => s.ui.gridStep);
   const units = doc.units;
+  const readOnly = !useCanEdit();
   return (
     <table className={c.table} onKeyDown={navigateGrid}>
       <thead className={c.head}>
@@ -43,7 +45,7 @@ export function SegmentsTable() {
             <tr key={s.id} className={c.row(selection?.kind === "segment" && selection.id === s.id)} onFocus={() => store.setUi({ selection: { kind: "segment", id: s.id } })}>
               <td className={`${c.td} text-paper-600`}>{i + 1}</td>
               <td className={c.td}>
-                <QuantityInput label={`Segment ${i + 1} length`} value={b - a} kind="length" units={units} onCommit={(length) => store.run((d) => setSegmentLength(d, { segmentId: s.id, length }))} />
+                <QuantityInput label={`Segment ${i + 1} length`} value={b - a} kind="length" units={units} readOnly={readOnly} onCommit={(length) => store.run((d) => setSegmentLength(d, { segmentId: s.id, length }))} />
               </td>
               <td className={c.td}>
                 <SectionButton segmentId={s.id} number={i + 1} className={c.smallButton} />
@@ -55,13 +57,14 @@ export function SegmentsTable() {
                     value={s[col.key]}
                     kind={col.kind}
                     units={units}
+                    readOnly={readOnly}
                     onCommit={(v) => store.run((d) => editSegment(d, { segmentId: s.id, props: { [col.key]: v } }))}
                     {...(col.optional ? { onClear: () => store.run((d) => editSegment(d, { segmentId: s.id, props: { [col.key]: undefined } })) } : {})}
                   />
                 </td>
               ))}
               <td className={c.td}>
-                <button type="button" className={c.smallButton} aria-label={`Split segment ${i + 1} at its middle`} onClick={() => store.run((d) => splitSpan(d, { segmentId: s.id, x: snapToGrid((a + b) / 2, gridStep) }))}>
+                <button type="button" className={c.smallButton} aria-label={`Split segment ${i + 1} at its middle`} disabled={readOnly} onClick={() => store.run((d) => splitSpan(d, { segmentId: s.id, x: snapToGrid((a + b) / 2, gridStep) }))}>
                   Split
                 </button>
               </td>

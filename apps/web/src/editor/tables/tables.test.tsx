@@ -70,3 +70,28 @@ describe("editable tables issue commands", () => {
     expect(document.activeElement).toBe(screen.getByLabelText("Node 2 x (m)"));
   });
 });
+
+describe("tables for a read-only role", () => {
+  it("show the values in read-only, focusable cells and commit nothing", () => {
+    const store = new EditorStore(twoSpanDocument(), { canEdit: false });
+    render(withStore(store, <NodesTable />));
+    const x = screen.getByLabelText("Node 2 x (m)") as HTMLInputElement;
+    expect(x.readOnly).toBe(true);
+    expect(x.value).toBe("6");
+    type("Node 2 x (m)", "6500 mm");
+    expect(store.doc.nodes[1]!.x).toBe(6);
+    const support = screen.getByLabelText("Node 2 support") as HTMLInputElement;
+    expect(support.tagName).toBe("INPUT");
+    expect(support.readOnly).toBe(true);
+    x.focus();
+    expect(document.activeElement).toBe(x);
+    fireEvent.keyDown(x, { key: "ArrowDown" });
+    expect(document.activeElement).toBe(screen.getByLabelText("Node 3 x (m)"));
+  });
+
+  it("disable adding and deleting loads", () => {
+    const store = new EditorStore(twoSpanDocument(), { canEdit: false });
+    render(withStore(store, <LoadsTable />));
+    for (const b of screen.getAllByRole("button")) expect((b as HTMLButtonElement).disabled).toBe(true);
+  });
+});

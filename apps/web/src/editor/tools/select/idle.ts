@@ -1,3 +1,4 @@
+import { canEditBeam } from "../../actions/editorActions";
 import type { ToolState } from "../Tool";
 
 export const idle: ToolState = {
@@ -11,7 +12,8 @@ export const idle: ToolState = {
       return;
     }
     store.setUi({ selection: target });
-    if (target.kind === "segment") return;
+    // Read-only users may select to inspect, but a press never becomes a drag.
+    if (target.kind === "segment" || !canEditBeam(store.getState())) return;
     return { to: "pointing", data: { startPx: input.px, startX: input.x, target } };
   },
 };
