@@ -1,4 +1,5 @@
 import { useState } from "react";
+import { useParams } from "react-router";
 import { findMaterialPreset, MATERIAL_PRESETS, type Material, type SectionShape } from "@spanwright/solver/design";
 import { MaterialPicker, SectionEditor } from "../../design";
 import { DEFAULT_SHAPES, SHAPE_LABELS } from "../../design/shapeFields";
@@ -8,6 +9,7 @@ import type { SegmentId } from "../model/ids";
 import { useEditor, useEditorStore } from "../store/useEditor";
 import { EditorDialog } from "./EditorDialog";
 import { useCanEdit } from "../store/useCanEdit";
+import { ProjectSectionLibrary } from "./ProjectSectionLibrary";
 
 export interface SectionButtonProps {
   readonly segmentId: SegmentId;
@@ -38,6 +40,15 @@ function SectionDialog({ segmentId, number, onClose }: { segmentId: SegmentId; n
   const [material, setMaterial] = useState<Material>(current?.material ?? findMaterialPreset("steel-a992") ?? MATERIAL_PRESETS[0]!);
   const [problem, setProblem] = useState<string | null>(null);
   const canEdit = useCanEdit();
+  const { projectId } = useParams();
+  // The pickers own their text once mounted; a picked library section remounts them with its values.
+  const [picked, setPicked] = useState(0);
+  const pick = (nextShape: SectionShape, nextMaterial: Material) => {
+    setShape(nextShape);
+    setMaterial(nextMaterial);
+    setProblem(null);
+    setPicked((n) => n + 1);
+  };
   // Refusals show here: the editor's notice bar sits behind the dialog.
   const apply = (segmentIds: readonly SegmentId[]) => {
     const result = setSegmentSection(store.doc, { segmentIds, shape, material });
@@ -47,8 +58,9 @@ function SectionDialog({ segmentId, number, onClose }: { segmentId: SegmentId; n
   return (
     <EditorDialog title={`Section and material: segment ${number}`} onClose={onClose}>
       <div className="space-y-5">
-        <MaterialPicker units={doc.units} initial={material} onChange={setMaterial} />
-        <SectionEditor units={doc.units} initialShape={shape} material={material} theory={doc.theory} onChange={(c) => setShape(c.shape)} />
+        {projectId && <ProjectSectionLibrary projectId={projectId} shape={shape} material={material} canSave={canEdit} onPick={pick} />}
+        <MaterialPicker key={`material-${picked}`} units={doc.units} initial={material} onChange={setMaterial} />
+        <SectionEditor key={`shape-${picked}`} units={doc.units} initialShape={shape} material={material} theory={doc.theory} onChange={(c) => setShape(c.shape)} />
         <p className="text-xs text-paper-600">
           Sets E, I (and A, G, κ where the material has G) of the segment. The revision saves those values; the shape and material
           themselves stay with this editing session only.
