@@ -2,14 +2,16 @@ import { afterAll, describe, expect, it } from "vitest";
 import { twoSpanModel } from "../testing/models.js";
 import { createSolverPool } from "./solverPool.js";
 
-/** Invented: a 300-span beam with a patterned live case, seconds of solver time (far past the API's work limit, which the pool does not check). */
+/** Invented: a 600-span beam with two patterned live cases, minutes of solver time (far past the API's work limit, which the pool does not check). */
 function slowModel(): Record<string, unknown> {
-  const spans = 300;
+  const spans = 600;
   return {
     format: "spanwright.beam/1",
     nodes: Array.from({ length: spans + 1 }, (_, i) => ({ x: i * 5, support: { type: "pinned" } })),
     segments: Array.from({ length: spans }, () => ({ E: 2e11, I: 2.5e-4 })),
-    loadCases: [{ id: "Q", category: "live", pattern: true, loads: [{ type: "distributed", x1: 0, x2: spans * 5, qy1: -5000, qy2: -5000 }] }],
+    loadCases: ["Q1", "Q2"].map((id) => ({ id, category: "live", pattern: true, loads: [{ type: "distributed", x1: 0, x2: spans * 5, qy1: -5000, qy2: -5000 }] })),
+    // the envelope over the pattern arrangements is the slow part, and only combinations have one
+    combinations: [{ id: "U", factors: { Q1: 1.5, Q2: 1.5 } }],
   };
 }
 
@@ -52,4 +54,24 @@ describe("solver pool", () => {
     await expect(pool.solve(twoSpanModel())).rejects.toMatchObject({ code: "solver-busy", details: { retryAfterSeconds: 2 } });
     await Promise.allSettled([...running, ...queued]);
   }, 20_000);
+
+  it("refuses a solve that waits for a thread longer than maxWaitMs with solver-busy", async () => {
+    const single = createSolverPool({ threads: 1, timeoutMs: 3_000, maxWaitMs: 300 });
+    try {
+      // the thread takes seconds to start on a busy machine; until then short waits are refused too
+      for (let tries = 0; ; tries++) {
+        const first = await single.solve(twoSpanModel()).catch((error: unknown) => error);
+        if (typeof first === "string") break;
+        expect(first).toMatchObject({ code: "solver-busy" });
+        expect(tries).toBeLessThan(100);
+      }
+      const slow = single.solve(slowModel()).catch((error: unknown) => error);
+      const started = Date.now();
+      await expect(single.solve(twoSpanModel())).rejects.toMatchObject({ code: "solver-busy" });
+      expect(Date.now() - started).toBeLessThan(2_000);
+      expect(await slow).toMatchObject({ code: "too-large" });
+    } finally {
+      await single.close();
+    }
+  }, 30_000);
 });

@@ -33,6 +33,8 @@ export interface SolverPoolOptions {
   timeoutMs: number;
   /** Solves waiting for a thread; more: 503 `solver-busy`. Default 64 per thread. */
   maxQueue?: number;
+  /** Longest a solve may wait for a thread, then 503 `solver-busy`; default twice `timeoutMs`. */
+  maxWaitMs?: number;
 }
 
 /** The solver on worker threads: engine plus close(), which ends every thread. */
@@ -44,6 +46,8 @@ export interface SolverPool extends Engine {
 interface Job {
   id: number;
   model: unknown;
+  /** Ends the wait for a thread; cleared once a thread takes the job. */
+  waitTimer: NodeJS.Timeout | null;
   resolve: (json: string) => void;
   reject: (error: unknown) => void;
 }
@@ -76,6 +80,8 @@ function solverFailure(reply: Extract<WorkerReply, { ok: false }>["error"]): Err
 export function createSolverPool(options: SolverPoolOptions): SolverPool {
   const threads = Math.max(1, options.threads ?? os.availableParallelism());
   const maxQueue = options.maxQueue ?? 64 * threads;
+  const maxWaitMs = options.maxWaitMs ?? 2 * options.timeoutMs;
+  const busy = () => new AppError("solver-busy", "the solver is busy; try again in a few seconds", { retryAfterSeconds: 2 });
   const queue: Job[] = [];
   const slots: Slot[] = [];
   let nextId = 1;
@@ -126,7 +132,10 @@ export function createSolverPool(options: SolverPoolOptions): SolverPool {
     }
     // a thread that cannot even start (a broken install): fail the waiting solves rather than hang
     // them, and try again a second later instead of spinning
-    for (const waiting of queue.splice(0)) waiting.reject(error);
+    for (const waiting of queue.splice(0)) {
+      if (waiting.waitTimer) clearTimeout(waiting.waitTimer);
+      waiting.reject(error);
+    }
     setTimeout(() => {
       if (!closed) slots.push(spawn());
     }, 1000).unref();
@@ -137,6 +146,7 @@ export function createSolverPool(options: SolverPoolOptions): SolverPool {
       if (!slot.ready || slot.job) continue;
       const job = queue.shift();
       if (!job) return;
+      if (job.waitTimer) clearTimeout(job.waitTimer);
       slot.job = job;
       slot.timer = setTimeout(() => {
         const seconds = options.timeoutMs / 1000;
@@ -156,17 +166,26 @@ export function createSolverPool(options: SolverPoolOptions): SolverPool {
     threads,
     solve(model) {
       if (closed) return Promise.reject(new Error("the solver pool is closed"));
-      if (queue.length >= maxQueue) {
-        return Promise.reject(new AppError("solver-busy", "the solver is busy; try again in a few seconds", { retryAfterSeconds: 2 }));
-      }
+      if (queue.length >= maxQueue) return Promise.reject(busy());
       return new Promise<string>((resolve, reject) => {
-        queue.push({ id: nextId++, model, resolve, reject });
+        const job: Job = { id: nextId++, model, waitTimer: null, resolve, reject };
+        // never a hung request: a solve that cannot get a thread in time is refused, not kept waiting
+        job.waitTimer = setTimeout(() => {
+          const index = queue.indexOf(job);
+          if (index < 0) return;
+          queue.splice(index, 1);
+          reject(busy());
+        }, maxWaitMs);
+        queue.push(job);
         dispatch();
       });
     },
     async close() {
       closed = true;
-      for (const job of queue.splice(0)) job.reject(new Error("the solver pool is closed"));
+      for (const job of queue.splice(0)) {
+        if (job.waitTimer) clearTimeout(job.waitTimer);
+        job.reject(new Error("the solver pool is closed"));
+      }
       await Promise.all(slots.splice(0).map((slot) => {
         slot.job?.reject(new Error("the solver pool is closed"));
         finish(slot);
