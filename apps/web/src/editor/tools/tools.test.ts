@@ -23,6 +23,16 @@ describe("select tool", () => {
     expect(xs(editor)).toEqual([0, 6, 12]);
   });
 
+  it("selects but never drags for a read-only role", () => {
+    const editor = new TestEditor(twoSpanDocument());
+    editor.store.setUi({ canEdit: false });
+    editor.pointerDown(6).pointerMove(5.5).pointerMove(5.03).pointerUp(5.03);
+    expect(editor.store.getState().ui.selection).toEqual({ kind: "node", id: ids.n1 });
+    expect(editor.runner.path).toBe("select.idle");
+    expect(xs(editor)).toEqual([0, 6, 12]);
+    expect(editor.store.getState().history.undoStack).toHaveLength(0);
+  });
+
   it("drags the end of a distributed load to stretch it", () => {
     const editor = new TestEditor(twoSpanDocument());
     // The block of the test document's line load sits just above the beam; press on its right end.
