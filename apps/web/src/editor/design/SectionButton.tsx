@@ -66,6 +66,7 @@ function SectionDialog({ segmentId, number, onClose }: { segmentId: SegmentId; n
           themselves stay with this editing session only.
         </p>
         {problem && <p role="alert" className="text-sm font-medium text-danger-700">{problem}</p>}
+        {!canEdit && <p className="text-sm text-paper-700">Your role can read sections but not apply them to the beam.</p>}
         <div className="flex flex-wrap justify-end gap-2">
           <Button variant="secondary" disabled={!canEdit} onClick={() => apply(doc.segments.map((g) => g.id))}>Apply to all {doc.segments.length} segments</Button>
           <Button variant="primary" disabled={!canEdit} onClick={() => apply([segmentId])}>Apply to segment {number}</Button>
