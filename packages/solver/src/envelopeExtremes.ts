@@ -9,7 +9,7 @@ import { COEFFICIENTS_PER_INTERVAL } from "./segmentField.js";
  * sub-interval the sum of its positive pieces and the sum of its negative pieces are plain
  * polynomials (interval-local coordinate u), so every envelope is a polynomial there too.
  */
-interface PatternSplit {
+export interface PatternSplit {
   cuts: number[];
   positive: Float64Array;
   negative: Float64Array;
@@ -20,6 +20,8 @@ export interface EnvelopeExtremesContext {
   analysis: Analysis;
   /** splits[quantity][case][interval], null for a non-patterned case. */
   splits: Record<EnvelopeQuantity, (PatternSplit[] | null)[]>;
+  /** Case parts (`evaluateCaseParts`) at both ends of every interval: [k][end][3·cases]. */
+  ends: Record<EnvelopeQuantity, Float64Array>;
 }
 
 export function prepareEnvelopeExtremes(analysis: Analysis): EnvelopeExtremesContext {
@@ -53,7 +55,17 @@ export function prepareEnvelopeExtremes(analysis: Analysis): EnvelopeExtremesCon
       return perInterval;
     });
   }
-  return { analysis, splits };
+  const ends = {} as EnvelopeExtremesContext["ends"];
+  const stride = 3 * analysis.cases.length;
+  for (const quantity of ENVELOPE_QUANTITIES) {
+    const values = new Float64Array(2 * (grid.length - 1) * stride);
+    for (let k = 0; k + 1 < grid.length; k++) {
+      evaluateCaseParts(analysis, k, 0, quantity, values.subarray(2 * k * stride, (2 * k + 1) * stride));
+      evaluateCaseParts(analysis, k, grid[k + 1]! - grid[k]!, quantity, values.subarray((2 * k + 1) * stride, (2 * k + 2) * stride));
+    }
+    ends[quantity] = values;
+  }
+  return { analysis, splits, ends };
 }
 
 class Tracker {
@@ -95,7 +107,7 @@ function visitFactorSet(context: EnvelopeExtremesContext, factors: FactorSet, qu
   const shifted = new Float64Array(n);
   const derivative = new Float64Array(degree);
   const cursor = new Int32Array(patterned.length);
-  seedWithBreakpoints(analysis, factors, quantity, tracker);
+  seedWithBreakpoints(context, factors, quantity, tracker);
   /** Visits the ends and interior stationary points of poly on [a, b] unless a bound rules it out. */
   const visit = (poly: Float64Array, a: number, b: number, x0: number, h: number, x1: number, isUpper: boolean) => {
     // Taylor coefficients at a: for t in [0, b − a] every tʲ ≥ 0, so d₀ + Σ max(0, dⱼ)(b − a)ʲ
@@ -160,25 +172,32 @@ function visitFactorSet(context: EnvelopeExtremesContext, factors: FactorSet, qu
   }
 }
 
-/** Ascending union of sorted cut lists. */
+/** Ascending union of sorted cut lists (k-way merge, duplicates dropped). */
 function mergeSorted(lists: number[][]): number[] {
-  const all = lists.flat().sort((p, q) => p - q);
-  return all.filter((v, i) => i === 0 || v !== all[i - 1]);
+  const out: number[] = [];
+  const at = new Int32Array(lists.length);
+  for (;;) {
+    let best = Infinity;
+    for (let i = 0; i < lists.length; i++) if (at[i]! < lists[i]!.length && lists[i]![at[i]!]! < best) best = lists[i]![at[i]!]!;
+    if (best === Infinity) return out;
+    out.push(best);
+    for (let i = 0; i < lists.length; i++) while (at[i]! < lists[i]!.length && lists[i]![at[i]!] === best) at[i]!++;
+  }
 }
 
 /**
  * Starts the trackers from the envelope at every breakpoint (both sides), so the bounds in
  * `visitFactorSet` can skip most sub-intervals: extremes often sit at supports and loads.
  */
-function seedWithBreakpoints(analysis: Analysis, factors: FactorSet, quantity: EnvelopeQuantity, tracker: Tracker): void {
+function seedWithBreakpoints(context: EnvelopeExtremesContext, factors: FactorSet, quantity: EnvelopeQuantity, tracker: Tracker): void {
+  const { analysis } = context;
   const grid = analysis.grid;
-  const parts = new Float64Array(3 * analysis.cases.length);
+  const ends = context.ends[quantity];
+  const stride = 3 * analysis.cases.length;
   for (let k = 0; k + 1 < grid.length; k++) {
-    for (const [u, x] of [
-      [0, grid[k]!],
-      [grid[k + 1]! - grid[k]!, grid[k + 1]!],
-    ] as const) {
-      evaluateCaseParts(analysis, k, u, quantity, parts);
+    for (let end = 0; end < 2; end++) {
+      const parts = ends.subarray((2 * k + end) * stride, (2 * k + end + 1) * stride);
+      const x = grid[k + end]!;
       const [max, min] = combineParts(analysis, factors, parts);
       if (max > tracker.max.value) tracker.max = { value: max, x };
       if (min < tracker.min.value) tracker.min = { value: min, x };

@@ -54,7 +54,7 @@ function envelopeResults(analysis: Analysis, places: StationPlaces, ids: string[
   if (ids.length === 0) return {};
   const context: EnvelopeExtremesContext = prepareEnvelopeExtremes(analysis);
   // envelopeStationRows gives the combinations in order, then "*": the order of ids.
-  const stations = envelopeStationRows(analysis, places);
+  const stations = envelopeStationRows(analysis, places, context);
   const out: Record<string, EnvelopeResult> = {};
   const perCombination = new Map<string, EnvelopeResult>();
   ids.forEach((id, i) => {

@@ -1,6 +1,6 @@
 import type { Analysis, Curve } from "./analysisTypes.js";
 import { locateInterval } from "./fieldQueries.js";
-import { evaluateCaseParts } from "./envelopeQueries.js";
+import { prepareEnvelopeExtremes, type EnvelopeExtremesContext, type PatternSplit } from "./envelopeExtremes.js";
 import { COEFFICIENTS_PER_INTERVAL, M_OFFSET, RZ_OFFSET, UY_OFFSET, V_OFFSET } from "./segmentField.js";
 
 export interface StationRow {
@@ -105,7 +105,7 @@ export function curveStationRows(places: StationPlaces, curve: Curve): StationRo
  * station are evaluated once and shared by every combination; "*" is the worst of the
  * combination rows, which is its definition.
  */
-export function envelopeStationRows(analysis: Analysis, places: StationPlaces): EnvelopeStationRow[][] {
+export function envelopeStationRows(analysis: Analysis, places: StationPlaces, context: EnvelopeExtremesContext = prepareEnvelopeExtremes(analysis)): EnvelopeStationRow[][] {
   const nc = analysis.cases.length;
   const combos = analysis.combinations;
   const starts = new Int32Array(combos.length + 1);
@@ -123,9 +123,9 @@ export function envelopeStationRows(analysis: Analysis, places: StationPlaces): 
   for (let s = 0; s < n; s++) {
     const k = places.k[s]!;
     const u = places.u[s]!;
-    evaluateCaseParts(analysis, k, u, "V", partsV);
-    evaluateCaseParts(analysis, k, u, "M", partsM);
-    evaluateCaseParts(analysis, k, u, "uy", partsUy);
+    evaluateSplitParts(analysis, context.splits.V, k, u, V_OFFSET, 2, partsV);
+    evaluateSplitParts(analysis, context.splits.M, k, u, M_OFFSET, 3, partsM);
+    evaluateSplitParts(analysis, context.splits.uy, k, u, UY_OFFSET, 5, partsUy);
     const x = places.x[s]!;
     const star = new EnvelopeRow(x, -Infinity, Infinity, -Infinity, Infinity, -Infinity, Infinity);
     for (let c = 0; c < combos.length; c++) {
@@ -158,4 +158,40 @@ export function envelopeStationRows(analysis: Analysis, places: StationPlaces): 
     rows[combos.length]![s] = star;
   }
   return rows;
+}
+
+function horner(coef: Float64Array, o: number, degree: number, u: number): number {
+  let v = coef[o + degree]!;
+  for (let i = degree - 1; i >= 0; i--) v = v * u + coef[o + i]!;
+  return v;
+}
+
+/**
+ * Per load case at (k, u): [value, positive part, negative part], as `evaluateCaseParts`, but a
+ * patterned case reads the sums of its positive and of its negative pieces from the sign splits
+ * (two polynomials instead of one per span piece). Inside a sub-interval no piece changes sign,
+ * so the parts are the same sums, added before evaluation instead of after.
+ */
+function evaluateSplitParts(analysis: Analysis, splits: (PatternSplit[] | null)[], k: number, u: number, offset: number, degree: number, out: Float64Array): void {
+  const cases = analysis.cases;
+  const n = degree + 1;
+  for (let c = 0; c < cases.length; c++) {
+    const perInterval = splits[c];
+    if (!perInterval) {
+      const v = horner(cases[c]!.curve.coef, k * COEFFICIENTS_PER_INTERVAL + offset, degree, u);
+      out[3 * c] = v;
+      out[3 * c + 1] = v;
+      out[3 * c + 2] = v;
+      continue;
+    }
+    const split = perInterval[k]!;
+    const cuts = split.cuts;
+    let s = 0;
+    while (s + 2 < cuts.length && u >= cuts[s + 1]!) s++;
+    const positive = horner(split.positive, s * n, degree, u);
+    const negative = horner(split.negative, s * n, degree, u);
+    out[3 * c] = positive + negative;
+    out[3 * c + 1] = positive;
+    out[3 * c + 2] = negative;
+  }
 }
