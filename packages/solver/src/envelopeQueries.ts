@@ -181,14 +181,27 @@ export function reactionEnvelope(analysis: Analysis, id: string): ReactionEnvelo
   return analysis.supportedNodes.map((node, r) => {
     const row: ReactionEnvelope = { node, fyMax: 0, fyMin: 0, mzMax: 0, mzMin: 0 };
     for (const key of ["fy", "mz"] as const) {
-      analysis.cases.forEach((loadCase, c) => {
-        const values = loadCase.pattern ? loadCase.pieces.map((p) => p.curve[key][r]!) : [loadCase.curve[key][r]!];
-        const positive = loadCase.pattern ? values.reduce((s, v) => s + Math.max(0, v), 0) : values[0]!;
-        const negative = loadCase.pattern ? values.reduce((s, v) => s + Math.min(0, v), 0) : values[0]!;
-        parts[3 * c] = loadCase.pattern ? positive + negative : values[0]!;
+      for (let c = 0; c < analysis.cases.length; c++) {
+        const loadCase = analysis.cases[c]!;
+        if (!loadCase.pattern) {
+          const value = loadCase.curve[key][r]!;
+          parts[3 * c] = value;
+          parts[3 * c + 1] = value;
+          parts[3 * c + 2] = value;
+          continue;
+        }
+        // Added from 0 in piece order: only the adverse pieces count (see evaluateCaseParts).
+        let positive = 0;
+        let negative = 0;
+        for (const piece of loadCase.pieces) {
+          const value = piece.curve[key][r]!;
+          positive += Math.max(0, value);
+          negative += Math.min(0, value);
+        }
+        parts[3 * c] = positive + negative;
         parts[3 * c + 1] = positive;
         parts[3 * c + 2] = negative;
-      });
+      }
       envelopeOfSets(analysis, sets, parts, pair, 0);
       if (key === "fy") [row.fyMax, row.fyMin] = [pair[0]!, pair[1]!];
       else [row.mzMax, row.mzMin] = [pair[0]!, pair[1]!];
