@@ -38,11 +38,12 @@ export function prefetchMe(queryClient: QueryClient): void {
   void queryClient.prefetchQuery({ queryKey: queryKeys.me, queryFn: ({ signal }) => fetchMe(signal), staleTime: ME_STALE_MS });
 }
 
-export function useSignIn() {
+/** Sign-in and sign-up answer alike: the session cookie is set and the body carries the user. */
+function useSessionStart<Input>(route: "signIn" | "signUp") {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (input: SignInRequest) =>
-      request(routePath("signIn"), {
+    mutationFn: (input: Input) =>
+      request(routePath(route), {
         method: "POST",
         body: input,
         parse: (d) => meResponseSchema.parse(d),
@@ -55,20 +56,12 @@ export function useSignIn() {
   });
 }
 
+export function useSignIn() {
+  return useSessionStart<SignInRequest>("signIn");
+}
+
 export function useSignUp() {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: (input: SignUpRequest) =>
-      request(routePath("signUp"), {
-        method: "POST",
-        body: input,
-        parse: (d) => meResponseSchema.parse(d),
-      }),
-    onSuccess: (body) => {
-      queryClient.removeQueries({ predicate: (q) => q.queryKey[0] !== "me" });
-      queryClient.setQueryData(queryKeys.me, body.user);
-    },
-  });
+  return useSessionStart<SignUpRequest>("signUp");
 }
 
 export function useSignOut() {
