@@ -119,7 +119,6 @@ export function envelopeStationRows(analysis: Analysis, places: StationPlaces, c
   const partsUy = parts.subarray(6 * nc, 9 * nc);
   const n = places.x.length;
   const rows: EnvelopeStationRow[][] = Array.from({ length: combos.length + 1 }, () => new Array(n));
-  const range = new Float64Array(6);
   for (let s = 0; s < n; s++) {
     const k = places.k[s]!;
     const u = places.u[s]!;
@@ -129,24 +128,45 @@ export function envelopeStationRows(analysis: Analysis, places: StationPlaces, c
     const x = places.x[s]!;
     const star = new EnvelopeRow(x, -Infinity, Infinity, -Infinity, Infinity, -Infinity, Infinity);
     for (let c = 0; c < combos.length; c++) {
-      range.fill(0);
       // [max, min] of each factored sum: patterned cases add only their adverse pieces.
+      let vMax = 0;
+      let vMin = 0;
+      let mMax = 0;
+      let mMin = 0;
+      let yMax = 0;
+      let yMin = 0;
       for (let j = starts[c]!; j < starts[c + 1]!; j++) {
         const at = 3 * caseIndex[j]!;
         const f = factor[j]!;
-        for (let q = 0; q < 3; q++) {
-          const positive = f * parts[3 * nc * q + at + 1]!;
-          const negative = f * parts[3 * nc * q + at + 2]!;
-          if (positive >= negative) {
-            range[2 * q]! += positive;
-            range[2 * q + 1]! += negative;
-          } else {
-            range[2 * q]! += negative;
-            range[2 * q + 1]! += positive;
-          }
+        let positive = f * partsV[at + 1]!;
+        let negative = f * partsV[at + 2]!;
+        if (positive >= negative) {
+          vMax += positive;
+          vMin += negative;
+        } else {
+          vMax += negative;
+          vMin += positive;
+        }
+        positive = f * partsM[at + 1]!;
+        negative = f * partsM[at + 2]!;
+        if (positive >= negative) {
+          mMax += positive;
+          mMin += negative;
+        } else {
+          mMax += negative;
+          mMin += positive;
+        }
+        positive = f * partsUy[at + 1]!;
+        negative = f * partsUy[at + 2]!;
+        if (positive >= negative) {
+          yMax += positive;
+          yMin += negative;
+        } else {
+          yMax += negative;
+          yMin += positive;
         }
       }
-      const row = new EnvelopeRow(x, range[2]!, range[3]!, range[0]!, range[1]!, range[4]!, range[5]!);
+      const row = new EnvelopeRow(x, mMax, mMin, vMax, vMin, yMax, yMin);
       rows[c]![s] = row;
       star.Mmax = Math.max(star.Mmax, row.Mmax);
       star.Mmin = Math.min(star.Mmin, row.Mmin);
