@@ -65,10 +65,13 @@ export type SectionResponse = z.infer<typeof sectionResponseSchema>;
 /**
  * Query of the calculation report: `sectionId` names the project section whose member checks it
  * prints (none: no checks, since revisions do not store sections); `method` says how the model's
- * combinations are read (AISC 360-22 §B3: LRFD or ASD).
+ * combinations are read (AISC 360-22 §B3: LRFD or ASD); `lb` is the unbraced length of the
+ * compression flange in metres, braces every `lb` from the start of each span (none: braced at the
+ * supports only). Query strings arrive as text, hence the coercion.
  */
 export const reportQuerySchema = z.object({
   sectionId: sectionIdSchema.optional(),
   method: z.enum(["LRFD", "ASD"]).default("LRFD"),
+  lb: z.coerce.number().positive().finite().optional(),
 });
 export type ReportQuery = z.infer<typeof reportQuerySchema>;

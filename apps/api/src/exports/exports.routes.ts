@@ -39,6 +39,6 @@ export function registerExportRoutes(router: Router, db: Db, sections: SectionsS
     const query = parseRequest(reportQuerySchema, req.query, "query");
     const ctx = await loadRevisionContext(db, user.id, ids);
     const section = query.sectionId ? await sections.get(user.id, ids.projectId, query.sectionId) : null;
-    sendAttachment(res, await revisionPdf(ctx, section ? memberChecks(ctx.model, section, query.method) : undefined));
+    sendAttachment(res, await revisionPdf(ctx, section ? memberChecks(ctx.model, section, query.method, query.lb ?? null) : undefined));
   });
 }

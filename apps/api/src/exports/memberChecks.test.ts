@@ -1,7 +1,8 @@
 import { describe, expect, it } from "vitest";
 import type { BeamModel } from "@spanwright/handoff";
-import type { Material } from "@spanwright/solver/design";
-import { SERVICE_COMBINATION_ID, memberChecks } from "./memberChecks.js";
+import { checkStations, stationsFromResult, steelBeamChecks, type Material } from "@spanwright/solver/design";
+import { solve } from "@spanwright/solver";
+import { SERVICE_COMBINATION_ID, bracePointsEvery, memberChecks } from "./memberChecks.js";
 
 /** Invented demo beam: two 5 m spans, dead 10 kN/m and live 5 kN/m, combination 1.2D + 1.6L. */
 const model: BeamModel = {
@@ -57,5 +58,45 @@ describe("memberChecks", () => {
     const { rows, basis } = memberChecks(model, { name: "GL", shape: { kind: "rectangle", b: 0.2, h: 0.4 }, material: timber }, "LRFD");
     expect(new Set(rows.map((r) => r.check.id))).toEqual(new Set(["deflection"]));
     expect(basis).toContain("only deflections");
+  });
+
+  describe("with an unbraced length Lb", () => {
+    const iShape = { kind: "i-shape" as const, d: 0.3, bf: 0.15, tf: 0.01, tw: 0.006 };
+    // The same loads over two 10 m spans, where lateral-torsional buckling governs without braces.
+    const long: BeamModel = { ...model, nodes: [0, 10, 20].map((x) => ({ x, support: { type: "pinned" as const } })) };
+    const f2Capacities = (m: BeamModel, Lb: number | null) =>
+      memberChecks(m, { name: "I-300", shape: iShape, material: steel }, "LRFD", Lb).rows.filter((r) => r.check.id.startsWith("aisc360-22-f2")).map((r) => (r.check.status === "not-covered" ? NaN : r.check.capacity));
+    const capacityOfF2 = (Lb: number | null) => f2Capacities(model, Lb)[0]!;
+    // Hand check (AISC 360-22 F2, compact flanges bf/2tf = 7.5 < 0.38·√(E/Fy) = 9.15 and web
+    // h/tw = 46.7 < 3.76·√(E/Fy) = 90.5, Table B4.1b): Zx = bf·tf·(d − tf) + tw·(d − 2tf)²/4
+    // = 0.15·0.01·0.29 + 0.006·0.28²/4 = 5.526e-4 m³; Iy = 2·tf·bf³/12 + (d − 2tf)·tw³/12 = 5.630e-6 m⁴,
+    // A = 4.68e-3 m², ry = 34.68 mm; Lp = 1.76·ry·√(E/Fy) = 1.470 m (F2-5).
+    // Lb = 1 m < Lp: φMn = 0.9·Fy·Zx = 0.9·345e6·5.526e-4 = 171.6 kN·m (F2-1, φb = 0.90 §F1).
+    const PHI_MP = 0.9 * 345e6 * (0.15 * 0.01 * 0.29 + (0.006 * 0.28 ** 2) / 4);
+
+    it("braces every Lb from the start of each span", () => {
+      expect(bracePointsEvery([{ label: "1", x1: 0, x2: 5, kind: "span" }, { label: "2", x1: 5, x2: 10, kind: "span" }], 2)).toEqual([2, 4, 7, 9]);
+      expect(bracePointsEvery([{ label: "1", x1: 0, x2: 5, kind: "span" }], null)).toEqual([]);
+    });
+
+    it("reaches the plastic moment when Lb < Lp, above the capacity braced at the supports only", () => {
+      for (const c of f2Capacities(long, 1)) expect(c).toBeCloseTo(PHI_MP, -2);
+      // Lb = 10 m, far beyond Lr (F2-6: rts = 39.8 mm, J = 1.20e-7 m⁴, ho = 0.29 m give Lr ≈ 4.1 m): elastic lateral-torsional buckling (F2-4)
+      // even with Cb from the moment diagram keeps φMn well under half of φMp
+      for (const c of f2Capacities(long, null)) expect(c).toBeLessThan(0.5 * PHI_MP);
+    });
+
+    it("gives the numbers steelBeamChecks gives for the same braces, as the editor's Checks tab does", () => {
+      const Lb = 2.5;
+      const spans = [{ label: "1", x1: 0, x2: 5, kind: "span" as const }, { label: "2", x1: 5, x2: 10, kind: "span" as const }];
+      const bracePoints = bracePointsEvery(spans, Lb);
+      const solved = solve({ ...model, stations: checkStations([0, 5, 10], bracePoints) });
+      const direct = steelBeamChecks({ shape: iShape, Fy: 345e6, E: 200e9, method: "LRFD", spans, bracePoints, strength: [{ id: "C1", stations: stationsFromResult(solved, "C1") }], deflection: [] });
+      const { rows, basis } = memberChecks(model, { name: "I-300", shape: iShape, material: steel }, "LRFD", Lb);
+      const f2 = (r: { check: { id: string } }) => r.check.id.startsWith("aisc360-22-f2");
+      expect(rows.filter(f2).map((r) => r.check)).toEqual(direct.filter(f2).map((r) => r.check));
+      expect(capacityOfF2(Lb)).not.toBeCloseTo(capacityOfF2(null), -2);
+      expect(basis).toContain("every Lb = 2.5 m");
+    });
   });
 });

@@ -47,18 +47,33 @@ const preset = (id: string) => {
 const BENDING_ALLOWABLE_OF_FY = 0.6;
 const SHEAR_ALLOWABLE_OF_FY = 0.4;
 
+/**
+ * Brace points every `Lb` from the start of each span (the span ends are braced anyway): the same
+ * rule as the editor's Checks tab (bracePointsEvery in apps/web/src/design/designModel.ts), so the
+ * report and the tab compute the same numbers. Belongs in @spanwright/solver/design once shared.
+ */
+export function bracePointsEvery(spans: readonly SpanRef[], Lb: number | null): number[] {
+  if (Lb === null || !(Lb > 0)) return [];
+  const points: number[] = [];
+  for (const s of spans) {
+    for (let x = s.x1 + Lb; x < s.x2 - 1e-9; x += Lb) points.push(x);
+  }
+  return points;
+}
+
 function maxAbs(stations: readonly StationLike[], key: "M" | "V", x1: number, x2: number): number {
   return stations.filter((s) => s.x >= x1 - 1e-9 && s.x <= x2 + 1e-9).reduce((m, s) => Math.max(m, Math.abs(s[key])), 0);
 }
 
 /**
  * The report's member checks for one project section on a beam: spans from the supports, braced
- * at the supports only (Lb = span); strength from the model's combinations (or its load cases when
+ * at the supports and every `Lb` metres from the start of each span (null: at the supports only,
+ * Lb = span); strength from the model's combinations (or its load cases when
  * it has none), all pattern pieces loaded; deflection L/360 for each live case and L/240 for the
  * unfactored sum of dead and live cases (IBC floor presets). A doubly symmetric I-shape is checked
  * by AISC 360-22 F2 and G2; any other shape elastically against 0.6·Fy and 0.4·Fy when Fy is known.
  */
-export function memberChecks(model: BeamModel, section: CheckedSection, method: DesignMethod): MemberChecks {
+export function memberChecks(model: BeamModel, section: CheckedSection, method: DesignMethod, Lb: number | null = null): MemberChecks {
   const spans: SpanRef[] = listSpans(model).map((s, i, all) => ({
     label: String(s.number),
     x1: s.x1,
@@ -70,7 +85,8 @@ export function memberChecks(model: BeamModel, section: CheckedSection, method: 
   const live = model.loadCases.filter((c) => c.category === "live").map((c) => c.id);
   const service = dead.length > 0 && live.length > 0 ? [{ id: SERVICE_COMBINATION_ID, factors: Object.fromEntries([...dead, ...live].map((id) => [id, 1])) }] : [];
   const ends = [...new Set(spans.flatMap((s) => [s.x1, s.x2]))];
-  const solved = solve({ ...model, combinations: [...model.combinations, ...service], stations: checkStations(ends, []) });
+  const braces = bracePointsEvery(spans, Lb);
+  const solved = solve({ ...model, combinations: [...model.combinations, ...service], stations: checkStations(ends, braces) });
   const at = (id: string) => stationsFromResult(solved, id);
 
   const strengthIds = model.combinations.length > 0 ? model.combinations.map((c) => c.id) : model.loadCases.filter((c) => c.category !== "settlement").map((c) => c.id);
@@ -86,12 +102,13 @@ export function memberChecks(model: BeamModel, section: CheckedSection, method: 
   const mpa = (pa: number) => `${Number((pa / 1e6).toPrecision(4))} MPa`;
   const describe = `${section.name} (${shape.kind}, depth ${Number((props.depth * 1000).toPrecision(4))} mm), ${material.name}, E = ${Number((material.E / 1e9).toPrecision(4))} GPa${Fy ? `, Fy = ${mpa(Fy)}` : ""}`;
   const cases = model.combinations.length > 0 ? `combinations taken as ${method} load combinations` : "unfactored load cases (the model has no combinations)";
-  const common = `${cases}, all pattern pieces loaded; compression flange braced at the supports only`;
+  const bracing = Lb === null ? "braced at the supports only (Lb = span)" : `braced at the supports and every Lb = ${Number(Lb.toPrecision(4))} m from the start of each span`;
+  const common = `${cases}, all pattern pieces loaded; compression flange ${bracing}`;
 
   let rows: SpanCheckRow[];
   let assumptions: string;
   if (shape.kind === "i-shape" && Fy !== undefined) {
-    rows = steelBeamChecks({ shape, Fy, E: material.E, method, spans, bracePoints: [], strength, deflection });
+    rows = steelBeamChecks({ shape, Fy, E: material.E, method, spans, bracePoints: braces, strength, deflection });
     assumptions = `AISC 360-22 ${method}; ${common}`;
   } else {
     rows = [];
