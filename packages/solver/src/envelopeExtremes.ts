@@ -37,17 +37,33 @@ export function prepareEnvelopeExtremes(analysis: Analysis): EnvelopeExtremesCon
         const h = grid[k + 1]! - grid[k]!;
         const o = k * COEFFICIENTS_PER_INTERVAL + offset;
         const cuts = [0, h];
-        for (const piece of loadCase.pieces) cuts.push(...findSignChanges(piece.curve.coef, o, degree, 0, h));
+        // Pieces that keep their sign on the interval go to one side once; only the others
+        // are classified on each sub-interval between sign changes.
+        const fixedPositive = new Float64Array(n);
+        const fixedNegative = new Float64Array(n);
+        const changing: Float64Array[] = [];
+        for (const piece of loadCase.pieces) {
+          const coef = piece.curve.coef;
+          if (keepsSign(coef, o, degree, h)) {
+            const target = coef[o]! > 0 ? fixedPositive : fixedNegative;
+            for (let i = 0; i < n; i++) target[i]! += coef[o + i]!;
+            continue;
+          }
+          changing.push(coef);
+          for (const root of findSignChanges(coef, o, degree, 0, h)) cuts.push(root);
+        }
         cuts.sort((a, b) => a - b);
         const subs = cuts.length - 1;
         const positive = new Float64Array(subs * n);
         const negative = new Float64Array(subs * n);
         for (let s = 0; s < subs; s++) {
+          positive.set(fixedPositive, s * n);
+          negative.set(fixedNegative, s * n);
           const mid = 0.5 * (cuts[s]! + cuts[s + 1]!);
-          for (const piece of loadCase.pieces) {
-            const v = evaluatePolynomial(piece.curve.coef, o, degree, mid);
+          for (const coef of changing) {
+            const v = evaluatePolynomial(coef, o, degree, mid);
             const target = v > 0 ? positive : negative;
-            for (let i = 0; i < n; i++) target[s * n + i]! += piece.curve.coef[o + i]!;
+            for (let i = 0; i < n; i++) target[s * n + i]! += coef[o + i]!;
           }
         }
         perInterval.push({ cuts, positive, negative });
@@ -66,6 +82,21 @@ export function prepareEnvelopeExtremes(analysis: Analysis): EnvelopeExtremesCon
     ends[quantity] = values;
   }
   return { analysis, splits, ends };
+}
+
+/**
+ * True when the polynomial cannot reach zero on [0, h]: |c₀| > Σ|cᵢ|hⁱ (i ≥ 1) bounds the change
+ * from the left end. Most span pieces far from their span pass, skipping root isolation. The
+ * 1e-12 margin covers rounding in the bound; a piece that fails is simply searched for roots.
+ */
+function keepsSign(coef: Float64Array, o: number, degree: number, h: number): boolean {
+  let change = 0;
+  let power = 1;
+  for (let i = 1; i <= degree; i++) {
+    power *= h;
+    change += Math.abs(coef[o + i]!) * power;
+  }
+  return Math.abs(coef[o]!) > change * (1 + 1e-12);
 }
 
 class Tracker {
