@@ -40,6 +40,7 @@ function renderAs(role: Role) {
       [`GET ${base}`]: { status: 200, body: { beam, revision: { ...revision, version: 4, status: "draft" } } },
       [`GET ${base}/revisions/3`]: { status: 200, body: { revision } },
       [`GET ${base}/revisions/3/reactions`]: { status: 200, body: { version: 3, units: unitsFor("si"), table: sampleReactionTable(), upliftSupports: [] } },
+      [`GET /api/projects/${P}/sections`]: { status: 200, body: { sections: [] } },
     }),
   );
   renderRoutes([{ path: "/projects/:projectId/beams/:beamId/revisions/:version", element: <RevisionPage /> }], `/projects/${P}/beams/${B}/revisions/3`);

@@ -11,6 +11,7 @@ import { Loading, QueryError } from "../../components/QueryState";
 import { formatDate } from "../../formatDate";
 import { HandoffDialog } from "../../handoffs/HandoffDialog";
 import { CheckRevisionForm } from "../../revisions/CheckRevisionForm";
+import { ChecksReportLink } from "../../revisions/ChecksReportLink";
 import { DownloadLinks } from "../../revisions/DownloadLinks";
 import { ReactionTable } from "../../revisions/ReactionTable";
 import { RevisionStatusBadge } from "../../revisions/RevisionStatusBadge";
@@ -64,6 +65,7 @@ function RevisionView({ projectId, beamId, version }: { projectId: string; beamI
             </div>
             <div className="flex flex-col items-end gap-2">
               <DownloadLinks projectId={projectId} beamId={beamId} version={r.version} />
+              <ChecksReportLink projectId={projectId} beamId={beamId} version={r.version} units={p.unitSystem} />
               {can(p.role, "edit") && <Button variant="accent" size="sm" onClick={() => setIssuing(true)}>{`Issue r${r.version}…`}</Button>}
               {can(p.role, "check") && r.status === "draft" && <CheckRevisionForm projectId={projectId} beamId={beamId} version={r.version} />}
             </div>

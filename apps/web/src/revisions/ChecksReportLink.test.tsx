@@ -1,0 +1,71 @@
+import { afterEach, describe, expect, it, vi } from "vitest";
+import { fireEvent, screen } from "@testing-library/react";
+import { findMaterialPreset } from "@spanwright/solver/design";
+import { renderWithProviders, stubFetch } from "../test/renderWithProviders";
+import { ChecksReportLink, parseUnbracedLength } from "./ChecksReportLink";
+
+afterEach(() => {
+  vi.unstubAllGlobals();
+});
+
+const P = "6a0f3c52-8d1e-4b7a-9c2f-1e5d7b3a9c40";
+const B = "c4d2e8f1-7a3b-4c5d-9e6f-2a1b3c4d5e6f";
+const when = "2026-11-30T09:00:00.000Z";
+const steel = findMaterialPreset("steel-a992")!;
+
+/** Invented library entries of an imaginary warehouse mezzanine: two welded I-sections. */
+const section = (id: string, name: string, d: number) => ({
+  id, projectId: P, name,
+  shape: { kind: "i-shape", d, bf: 0.15, tf: 0.01, tw: 0.006 },
+  material: steel,
+  // Values the server would compute (plates, fillets ignored); not read by the link.
+  sectionProperties: { kind: "i-shape", A: 4.68e-3, I: 7.41e-5, depth: d, yTop: d / 2, Stop: 4.94e-4, Sbot: 4.94e-4, Z: 5.53e-4, yPlastic: d / 2, Q: 2.76e-4, bNA: 0.006, shearArea: 1.8e-3, shearFactor: null, shearAreaBasis: "d·tw" },
+  createdBy: { id: "u1", name: "Odile Marsh" },
+  createdAt: when,
+  updatedAt: when,
+});
+const first = section("0b6c1e52-3f4a-4d8b-9a7c-5e2f1d3c4b5a", "Mezzanine I-300", 0.3);
+const second = section("1c7d2f63-4a5b-4e9c-8b8d-6f3a2e4d5c6b", "Mezzanine I-360", 0.36);
+
+function renderLink(units: "si" | "us") {
+  vi.stubGlobal("fetch", stubFetch({ [`GET /api/projects/${P}/sections`]: { status: 200, body: { sections: [first, second] } } }));
+  renderWithProviders(<ChecksReportLink projectId={P} beamId={B} version={3} units={units} />);
+}
+
+const hrefOf = () => new URL(screen.getByRole("link", { name: "PDF report with member checks" }).getAttribute("href")!, "http://x");
+
+describe("ChecksReportLink", () => {
+  it("carries the chosen section, the method and Lb converted to metres", async () => {
+    renderLink("us");
+    fireEvent.change(await screen.findByLabelText("Project section"), { target: { value: second.id } });
+    fireEvent.change(screen.getByLabelText("Method"), { target: { value: "ASD" } });
+    fireEvent.change(screen.getByLabelText(/Unbraced length Lb/), { target: { value: "10" } });
+    const url = hrefOf();
+    expect(url.pathname).toBe(`/api/projects/${P}/beams/${B}/revisions/3/report.pdf`);
+    expect(url.searchParams.get("sectionId")).toBe(second.id);
+    expect(url.searchParams.get("method")).toBe("ASD");
+    // 10 ft = 10 · 0.3048 m = 3.048 m exactly (NIST SP 811, appendix B)
+    expect(Number(url.searchParams.get("lb"))).toBeCloseTo(3.048, 12);
+  });
+
+  it("leaves lb out when empty (braced at the supports only) and withholds the link for Lb ≤ 0", async () => {
+    renderLink("si");
+    await screen.findByLabelText("Project section");
+    const url = hrefOf();
+    expect(url.searchParams.get("sectionId")).toBe(first.id);
+    expect(url.searchParams.get("method")).toBe("LRFD");
+    expect(url.searchParams.has("lb")).toBe(false);
+    fireEvent.change(screen.getByLabelText(/Unbraced length Lb/), { target: { value: "0" } });
+    expect(screen.queryByRole("link", { name: "PDF report with member checks" })).toBeNull();
+    expect(screen.getByText("Lb must be greater than zero.")).toBeTruthy();
+  });
+});
+
+describe("parseUnbracedLength", () => {
+  it("reads the project's units and explicit units into metres", () => {
+    expect(parseUnbracedLength("2.5", "si")).toEqual({ ok: true, lb: 2.5 });
+    expect(parseUnbracedLength("2500 mm", "us")).toEqual({ ok: true, lb: 2.5 });
+    expect(parseUnbracedLength("  ", "si")).toEqual({ ok: true, lb: null });
+    expect(parseUnbracedLength("abc", "si").ok).toBe(false);
+  });
+});
