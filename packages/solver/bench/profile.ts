@@ -41,5 +41,5 @@ import { reactionEnvelope } from "../src/envelopeQueries.js";
 const places = placeStations(analysis.grid, analysis.stations);
 row("placeStations", median(() => placeStations(analysis.grid, analysis.stations), 30));
 row("curveStationRows x16", median(() => [...analysis.cases, ...analysis.combinations].forEach((c) => curveStationRows(places, c.curve)), 30));
-row("envelopeStationRows", median(() => envelopeStationRows(analysis, places), 30));
+row("envelopeStationRows", median(() => envelopeStationRows(analysis, places, context), 30));
 row("reactionEnvelope x11", median(() => [...analysis.combinations.map((c) => c.id), "*"].forEach((id) => reactionEnvelope(analysis, id)), 30));
