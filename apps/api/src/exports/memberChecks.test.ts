@@ -2,7 +2,8 @@ import { describe, expect, it } from "vitest";
 import type { BeamModel } from "@spanwright/handoff";
 import { checkStations, stationsFromResult, steelBeamChecks, type Material } from "@spanwright/solver/design";
 import { solve } from "@spanwright/solver";
-import { SERVICE_COMBINATION_ID, bracePointsEvery, memberChecks } from "./memberChecks.js";
+import { bracePointsEvery } from "@spanwright/solver/design";
+import { SERVICE_COMBINATION_ID, memberChecks } from "./memberChecks.js";
 
 /** Invented demo beam: two 5 m spans, dead 10 kN/m and live 5 kN/m, combination 1.2D + 1.6L. */
 const model: BeamModel = {

@@ -1,6 +1,7 @@
 import { solve } from "@spanwright/solver";
 import {
   DEFLECTION_LIMIT_PRESETS,
+  bracePointsEvery,
   checkBendingStress,
   checkDeflection,
   checkShearStress,
@@ -46,20 +47,6 @@ const preset = (id: string) => {
  */
 const BENDING_ALLOWABLE_OF_FY = 0.6;
 const SHEAR_ALLOWABLE_OF_FY = 0.4;
-
-/**
- * Brace points every `Lb` from the start of each span (the span ends are braced anyway): the same
- * rule as the editor's Checks tab (bracePointsEvery in apps/web/src/design/designModel.ts), so the
- * report and the tab compute the same numbers. Belongs in @spanwright/solver/design once shared.
- */
-export function bracePointsEvery(spans: readonly SpanRef[], Lb: number | null): number[] {
-  if (Lb === null || !(Lb > 0)) return [];
-  const points: number[] = [];
-  for (const s of spans) {
-    for (let x = s.x1 + Lb; x < s.x2 - 1e-9; x += Lb) points.push(x);
-  }
-  return points;
-}
 
 function maxAbs(stations: readonly StationLike[], key: "M" | "V", x1: number, x2: number): number {
   return stations.filter((s) => s.x >= x1 - 1e-9 && s.x <= x2 + 1e-9).reduce((m, s) => Math.max(m, Math.abs(s[key])), 0);

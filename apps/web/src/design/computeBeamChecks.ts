@@ -1,4 +1,5 @@
 import {
+  bracePointsEvery,
   checkBendingStress,
   checkDeflection,
   checkShearStress,
@@ -14,7 +15,7 @@ import {
   type SectionShape,
   type SpanCheckRow,
 } from "@spanwright/solver/design";
-import { bracePointsEvery, designSpans, resultCovers, type DesignModel, type DesignSpan } from "./designModel";
+import { designSpans, resultCovers, type DesignModel, type DesignSpan } from "./designModel";
 
 export interface BeamCheckRequest {
   readonly model: DesignModel;

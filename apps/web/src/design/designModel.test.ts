@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { bracePointsEvery, designSpans, resultCovers, type DesignModel } from "./designModel";
+import { bracePointsEvery } from "@spanwright/solver/design";
+import { designSpans, resultCovers, type DesignModel } from "./designModel";
 
 const pinned = { type: "pinned" };
 const model = (nodes: DesignModel["nodes"]): DesignModel => ({ nodes, segments: [], loadCases: [] });

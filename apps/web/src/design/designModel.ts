@@ -47,15 +47,6 @@ export function designSpans(model: DesignModel): DesignSpan[] {
   return spans;
 }
 
-/** Brace points every `Lb` from the start of each span (the span ends are braced anyway). */
-export function bracePointsEvery(spans: readonly SpanRef[], Lb: number | null): number[] {
-  if (Lb === null || !(Lb > 0)) return [];
-  const points: number[] = [];
-  for (const s of spans) {
-    for (let x = s.x1 + Lb; x < s.x2 - 1e-9; x += Lb) points.push(x);
-  }
-  return points;
-}
 
 export function caseIds(model: DesignModel): string[] {
   return model.loadCases.map((c) => c.id);

@@ -1,4 +1,4 @@
-import type { StationLike } from "./steelBeamChecks.js";
+import type { SpanRef, StationLike } from "./steelBeamChecks.js";
 
 /**
  * The part of the exchange format's result (`spanwright.result/1`) the checks read, typed
@@ -30,4 +30,17 @@ export function checkStations(spanEnds: readonly number[], bracePoints: readonly
     for (const f of [0.25, 0.5, 0.75]) xs.add(a + (b - a) * f);
   }
   return [...xs].sort((a, b) => a - b);
+}
+
+/**
+ * Brace points for a compression flange braced every `Lb` from the start of each span (and at the
+ * supports); none when `Lb` is null or not positive. The Checks tab and the PDF report share it.
+ */
+export function bracePointsEvery(spans: readonly SpanRef[], Lb: number | null): number[] {
+  if (Lb === null || !(Lb > 0)) return [];
+  const points: number[] = [];
+  for (const s of spans) {
+    for (let x = s.x1 + Lb; x < s.x2 - 1e-9; x += Lb) points.push(x);
+  }
+  return points;
 }
