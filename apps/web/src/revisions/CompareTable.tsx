@@ -11,6 +11,7 @@ import {
 } from "@tanstack/react-table";
 import type { ProjectUnits, ValueChangeJson } from "@spanwright/contracts";
 import { CopyTableButton } from "./CopyTableButton";
+import { SortableHeaderCell } from "./SortableHeaderCell";
 import {
   compareRowsToTsv,
   isHighlighted,
@@ -129,22 +130,9 @@ export function CompareTable({
           <thead className="bg-paper-50 text-xs text-paper-700">
             {table.getHeaderGroups().map((hg) => (
               <tr key={hg.id} className="border-b border-paper-200">
-                {hg.headers.map((h) => {
-                  const sorted = h.column.getIsSorted();
-                  return (
-                    <th key={h.id} scope="col" className="whitespace-nowrap px-3 py-2 font-medium"
-                      aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : undefined}>
-                      {h.column.getCanSort() ? (
-                        <button type="button" className="hover:underline" onClick={h.column.getToggleSortingHandler()}>
-                          {flexRender(h.column.columnDef.header, h.getContext())}
-                          <span aria-hidden="true">{sorted === "asc" ? " ▲" : sorted === "desc" ? " ▼" : ""}</span>
-                        </button>
-                      ) : (
-                        flexRender(h.column.columnDef.header, h.getContext())
-                      )}
-                    </th>
-                  );
-                })}
+                {hg.headers.map((h) => (
+                  <SortableHeaderCell key={h.id} header={h} />
+                ))}
               </tr>
             ))}
           </thead>

@@ -13,6 +13,7 @@ import type { ProjectUnits, ReactionTableJson } from "@spanwright/contracts";
 import { Alert } from "../components/Alert";
 import { Caution } from "../components/Caution";
 import { CopyTableButton } from "./CopyTableButton";
+import { SortableHeaderCell } from "./SortableHeaderCell";
 import { reactionTableToTsv } from "./copyAsTable";
 import {
   describeColumn,
@@ -170,28 +171,9 @@ export function ReactionTable({
           <thead className="bg-paper-50 text-xs text-paper-700">
             {reactTable.getHeaderGroups().map((hg) => (
               <tr key={hg.id} className="border-b border-paper-200">
-                {hg.headers.map((h) => {
-                  const sorted = h.column.getIsSorted();
-                  const sortable = !h.isPlaceholder && h.subHeaders.length === 0;
-                  return (
-                    <th
-                      key={h.id}
-                      colSpan={h.colSpan}
-                      scope="col"
-                      aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : undefined}
-                      className="whitespace-nowrap px-3 py-2 font-medium"
-                    >
-                      {h.isPlaceholder ? null : sortable ? (
-                        <button type="button" className="hover:underline" onClick={h.column.getToggleSortingHandler()}>
-                          {flexRender(h.column.columnDef.header, h.getContext())}
-                          <span aria-hidden="true">{sorted === "asc" ? " ▲" : sorted === "desc" ? " ▼" : ""}</span>
-                        </button>
-                      ) : (
-                        flexRender(h.column.columnDef.header, h.getContext())
-                      )}
-                    </th>
-                  );
-                })}
+                {hg.headers.map((h) => (
+                  <SortableHeaderCell key={h.id} header={h} />
+                ))}
               </tr>
             ))}
           </thead>
