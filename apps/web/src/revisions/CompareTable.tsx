@@ -11,7 +11,7 @@ import {
 } from "@tanstack/react-table";
 import type { ProjectUnits, ValueChangeJson } from "@spanwright/contracts";
 import { CopyTableButton } from "./CopyTableButton";
-import { SortableHeaderCell } from "./SortableHeaderCell";
+import { SortableTableHead } from "./SortableTableHead";
 import {
   compareRowsToTsv,
   isHighlighted,
@@ -127,15 +127,7 @@ export function CompareTable({
       <div className="overflow-x-auto rounded-md border border-paper-200">
         <table className="w-full text-left text-sm">
           <caption className="sr-only">{`Reactions of r${from} and r${to} with the change`}</caption>
-          <thead className="bg-paper-50 text-xs text-paper-700">
-            {table.getHeaderGroups().map((hg) => (
-              <tr key={hg.id} className="border-b border-paper-200">
-                {hg.headers.map((h) => (
-                  <SortableHeaderCell key={h.id} header={h} />
-                ))}
-              </tr>
-            ))}
-          </thead>
+          <SortableTableHead table={table} />
           <tbody>
             {table.getRowModel().rows.map((row) => (
               <tr key={row.original.key} data-severity={row.original.severity}

@@ -13,7 +13,7 @@ import type { ProjectUnits, ReactionTableJson } from "@spanwright/contracts";
 import { Alert } from "../components/Alert";
 import { Caution } from "../components/Caution";
 import { CopyTableButton } from "./CopyTableButton";
-import { SortableHeaderCell } from "./SortableHeaderCell";
+import { SortableTableHead } from "./SortableTableHead";
 import { reactionTableToTsv } from "./copyAsTable";
 import {
   describeColumn,
@@ -168,15 +168,7 @@ export function ReactionTable({
       <div className="overflow-x-auto rounded-md border border-paper-200">
         <table className="w-full text-left text-sm">
           {caption !== undefined && <caption className="sr-only">{caption}</caption>}
-          <thead className="bg-paper-50 text-xs text-paper-700">
-            {reactTable.getHeaderGroups().map((hg) => (
-              <tr key={hg.id} className="border-b border-paper-200">
-                {hg.headers.map((h) => (
-                  <SortableHeaderCell key={h.id} header={h} />
-                ))}
-              </tr>
-            ))}
-          </thead>
+          <SortableTableHead table={reactTable} />
           <tbody>
             {reactTable.getRowModel().rows.map((row) => (
               <tr key={row.id} className="border-b border-paper-100 last:border-0">

@@ -1,4 +1,4 @@
-import { flexRender, type Header } from "@tanstack/react-table";
+import { flexRender, type Header, type Table } from "@tanstack/react-table";
 
 /**
  * A column header of the reaction tables: a leaf column that can sort is a button with the sort
@@ -24,5 +24,20 @@ export function SortableHeaderCell<Row>({ header }: { header: Header<Row, unknow
         label
       )}
     </th>
+  );
+}
+
+/** The header rows of a reaction table, one sortable cell per leaf column. */
+export function SortableTableHead<Row>({ table }: { table: Table<Row> }) {
+  return (
+    <thead className="bg-paper-50 text-xs text-paper-700">
+      {table.getHeaderGroups().map((hg) => (
+        <tr key={hg.id} className="border-b border-paper-200">
+          {hg.headers.map((h) => (
+            <SortableHeaderCell key={h.id} header={h} />
+          ))}
+        </tr>
+      ))}
+    </thead>
   );
 }
