@@ -1,21 +1,15 @@
 import { solve } from "@spanwright/solver";
 import {
   DEFLECTION_LIMIT_PRESETS,
+  assembleBeamChecks,
   bracePointsEvery,
-  checkBendingStress,
-  checkDeflection,
-  checkShearStress,
-  checkStations,
+  checkStationsForSpans,
   propertiesOfValidShape,
-  spanDeflection,
   stationsFromResult,
-  steelBeamChecks,
   type DesignMethod,
   type Material,
   type SectionShape,
-  type SpanCheckRow,
   type SpanRef,
-  type StationLike,
 } from "@spanwright/solver/design";
 import { listSpans, type BeamModel, type ReportCheckRow } from "@spanwright/handoff";
 
@@ -48,10 +42,6 @@ const preset = (id: string) => {
 const BENDING_ALLOWABLE_OF_FY = 0.6;
 const SHEAR_ALLOWABLE_OF_FY = 0.4;
 
-function maxAbs(stations: readonly StationLike[], key: "M" | "V", x1: number, x2: number): number {
-  return stations.filter((s) => s.x >= x1 - 1e-9 && s.x <= x2 + 1e-9).reduce((m, s) => Math.max(m, Math.abs(s[key])), 0);
-}
-
 /**
  * The report's member checks for one project section on a beam: spans from the supports, braced
  * at the supports and every `Lb` metres from the start of each span (null: at the supports only,
@@ -71,9 +61,8 @@ export function memberChecks(model: BeamModel, section: CheckedSection, method: 
   const dead = model.loadCases.filter((c) => c.category === "dead").map((c) => c.id);
   const live = model.loadCases.filter((c) => c.category === "live").map((c) => c.id);
   const service = dead.length > 0 && live.length > 0 ? [{ id: SERVICE_COMBINATION_ID, factors: Object.fromEntries([...dead, ...live].map((id) => [id, 1])) }] : [];
-  const ends = [...new Set(spans.flatMap((s) => [s.x1, s.x2]))];
   const braces = bracePointsEvery(spans, Lb);
-  const solved = solve({ ...model, combinations: [...model.combinations, ...service], stations: checkStations(ends, braces) });
+  const solved = solve({ ...model, combinations: [...model.combinations, ...service], stations: checkStationsForSpans(spans, Lb) });
   const at = (id: string) => stationsFromResult(solved, id);
 
   const strengthIds = model.combinations.length > 0 ? model.combinations.map((c) => c.id) : model.loadCases.filter((c) => c.category !== "settlement").map((c) => c.id);
@@ -92,34 +81,22 @@ export function memberChecks(model: BeamModel, section: CheckedSection, method: 
   const bracing = Lb === null ? "braced at the supports only (Lb = span)" : `braced at the supports and every Lb = ${Number(Lb.toPrecision(4))} m from the start of each span`;
   const common = `${cases}, all pattern pieces loaded; compression flange ${bracing}`;
 
-  let rows: SpanCheckRow[];
-  let assumptions: string;
-  if (shape.kind === "i-shape" && Fy !== undefined) {
-    rows = steelBeamChecks({ shape, Fy, E: material.E, method, spans, bracePoints: braces, strength, deflection });
-    assumptions = `AISC 360-22 ${method}; ${common}`;
-  } else {
-    rows = [];
-    for (const span of spans) {
-      if (Fy !== undefined) {
-        for (const c of strength) {
-          const M = maxAbs(c.stations, "M", span.x1, span.x2);
-          rows.push({ span: span.label, caseId: c.id, x1: span.x1, x2: span.x2, check: checkBendingStress({ M, I: props.I, yTop: props.yTop, depth: props.depth, allowable: BENDING_ALLOWABLE_OF_FY * Fy }) });
-          if (props.Q !== null && props.bNA !== null) {
-            const V = maxAbs(c.stations, "V", span.x1, span.x2);
-            rows.push({ span: span.label, caseId: c.id, x1: span.x1, x2: span.x2, check: checkShearStress({ V, Q: props.Q, I: props.I, b: props.bNA, allowable: SHEAR_ALLOWABLE_OF_FY * Fy }) });
-          }
-        }
-      }
-      for (const d of deflection) {
-        const supportAt = span.kind === "cantilever" ? (span.supportAt ?? "left") : "both";
-        const delta = spanDeflection(d.stations, span.x1, span.x2, supportAt);
-        rows.push({ span: span.label, caseId: d.id, x1: span.x1, x2: span.x2, check: checkDeflection({ length: span.x2 - span.x1, spanKind: span.kind, deflection: delta, limit: d.limit, caseLabel: d.id }) });
-      }
-    }
-    assumptions =
-      Fy !== undefined
+  const { basis, rows } = assembleBeamChecks({
+    shape,
+    material,
+    method,
+    spans,
+    bracePoints: braces,
+    strength,
+    deflection,
+    allowableBending: Fy === undefined ? null : BENDING_ALLOWABLE_OF_FY * Fy,
+    allowableShear: Fy === undefined ? null : SHEAR_ALLOWABLE_OF_FY * Fy,
+  });
+  const assumptions =
+    basis === "aisc-360-22"
+      ? `AISC 360-22 ${method}; ${common}`
+      : Fy !== undefined
         ? `elastic stresses against 0.6·Fy in bending and 0.4·Fy in shear (common practice; conservative under factored combinations); ${common}`
         : "the material gives no Fy, so only deflections are checked";
-  }
   return { rows: rows.map(({ span, caseId, check }) => ({ span, caseId, check })), basis: `${describe}; ${assumptions}` };
 }

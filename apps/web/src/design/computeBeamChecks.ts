@@ -1,13 +1,9 @@
 import {
+  assembleBeamChecks,
   bracePointsEvery,
-  checkBendingStress,
-  checkDeflection,
-  checkShearStress,
-  checkStations,
-  propertiesOfValidShape,
-  spanDeflection,
+  checkStationsForSpans,
   stationsFromResult,
-  steelBeamChecks,
+  type CbRule,
   type DeflectionLimit,
   type DesignMethod,
   type Material,
@@ -15,7 +11,7 @@ import {
   type SectionShape,
   type SpanCheckRow,
 } from "@spanwright/solver/design";
-import { designSpans, resultCovers, type DesignModel, type DesignSpan } from "./designModel";
+import { designSpans, resultCovers, type DesignModel } from "./designModel";
 
 export interface BeamCheckRequest {
   readonly model: DesignModel;
@@ -38,6 +34,8 @@ export interface BeamCheckRequest {
   /** User allowables for the elastic checks of sections other than I-shapes, Pa. */
   readonly allowableBending: number | null;
   readonly allowableShear: number | null;
+  /** How Cb is found for I-shapes; default eq. F1-1. */
+  readonly cb?: CbRule;
 }
 
 export type BeamCheckOutcome =
@@ -46,44 +44,16 @@ export type BeamCheckOutcome =
   /** The result lacks stations and no solver was given: solve again with `stations`. */
   | { readonly ok: false; readonly code: "missing-stations"; readonly message: string; readonly stations: readonly number[] };
 
-function peak(values: readonly number[]): number {
-  return values.reduce((m, v) => (Math.abs(v) > Math.abs(m) ? v : m), 0);
-}
-
-function elasticRows(req: BeamCheckRequest, spans: readonly DesignSpan[], result: ResultLike): SpanCheckRow[] {
-  const p = propertiesOfValidShape(req.shape);
-  const rows: SpanCheckRow[] = [];
-  for (const span of spans) {
-    for (const id of req.strengthIds) {
-      const inSpan = stationsFromResult(result, id).filter((s) => s.x >= span.x1 - 1e-9 && s.x <= span.x2 + 1e-9);
-      if (inSpan.length === 0) continue;
-      const at = { span: span.label, caseId: id, x1: span.x1, x2: span.x2 };
-      if (req.allowableBending !== null)
-        rows.push({ ...at, check: checkBendingStress({ M: peak(inSpan.map((s) => s.M)), I: p.I, yTop: p.yTop, depth: p.depth, allowable: req.allowableBending }) });
-      if (req.allowableShear !== null && p.Q !== null && p.bNA !== null)
-        rows.push({ ...at, check: checkShearStress({ V: peak(inSpan.map((s) => s.V)), Q: p.Q, I: p.I, b: p.bNA, allowable: req.allowableShear }) });
-    }
-    for (const { id, limit } of req.deflection) {
-      const supportAt = span.kind === "cantilever" ? (span.supportAt ?? "left") : "both";
-      const deflection = spanDeflection(stationsFromResult(result, id), span.x1, span.x2, supportAt);
-      const check = checkDeflection({ length: span.x2 - span.x1, spanKind: span.kind, deflection, limit, caseLabel: id });
-      rows.push({ span: span.label, caseId: id, x1: span.x1, x2: span.x2, check });
-    }
-  }
-  return rows;
+/** x positions (m) at which the checks need results: span ends, brace points and quarter points. */
+export function stationsForChecks(model: DesignModel, Lb: number | null): number[] {
+  return checkStationsForSpans(designSpans(model), Lb);
 }
 
 /**
- * The per-span check table for a beam: AISC 360-22 F2/G2 for I-shapes, elastic σ and τ against
- * user allowables otherwise, and deflection limits. Solves the model again when the given result
- * lacks the stations the checks need (span ends, braces, quarter points); `solve` is pure and fast.
+ * The per-span check table for a beam (`assembleBeamChecks`: AISC 360-22 F2/G2 for I-shapes,
+ * elastic σ and τ against user allowables otherwise, and deflection limits). Solves the model again
+ * when the given result lacks the stations the checks need (span ends, braces, quarter points).
  */
-/** x positions (m) at which the checks need results: span ends, brace points and quarter points. */
-export function stationsForChecks(model: DesignModel, Lb: number | null): number[] {
-  const spans = designSpans(model);
-  return checkStations([...new Set(spans.flatMap((s) => [s.x1, s.x2]))], bracePointsEvery(spans, Lb));
-}
-
 export function computeBeamChecks(req: BeamCheckRequest): BeamCheckOutcome {
   const spans = designSpans(req.model);
   if (spans.length === 0) return { ok: false, code: "invalid-input", message: "The beam has no spans to check." };
@@ -104,21 +74,20 @@ export function computeBeamChecks(req: BeamCheckRequest): BeamCheckOutcome {
     }
   }
   if (!result) return { ok: false, code: "invalid-input", message: "No result to check." };
-  const notes: string[] = [];
-  if (req.shape.kind === "i-shape") {
-    if (req.material.Fy === undefined) return { ok: false, code: "invalid-input", message: "The AISC checks need the yield stress Fy of the material." };
-    const rows = steelBeamChecks({
-      shape: req.shape,
-      Fy: req.material.Fy,
-      E: req.material.E,
-      method: req.method,
-      spans,
-      bracePoints: braces,
-      strength: req.strengthIds.map((id) => ({ id, stations: stationsFromResult(result, id) })),
-      deflection: req.deflection.map(({ id, limit }) => ({ id, stations: stationsFromResult(result, id), limit })),
-    });
-    return { ok: true, rows, resolved, notes };
-  }
-  notes.push("AISC 360-22 Chapters F and G apply to I-shapes here; this section is checked elastically against your allowables.");
-  return { ok: true, rows: elasticRows(req, spans, result), resolved, notes };
+  if (req.shape.kind === "i-shape" && req.material.Fy === undefined)
+    return { ok: false, code: "invalid-input", message: "The AISC checks need the yield stress Fy of the material." };
+  const { basis, rows } = assembleBeamChecks({
+    shape: req.shape,
+    material: req.material,
+    method: req.method,
+    spans,
+    bracePoints: braces,
+    strength: req.strengthIds.map((id) => ({ id, stations: stationsFromResult(result, id) })),
+    deflection: req.deflection.map(({ id, limit }) => ({ id, stations: stationsFromResult(result, id), limit })),
+    allowableBending: req.allowableBending,
+    allowableShear: req.allowableShear,
+    ...(req.cb ? { cb: req.cb } : {}),
+  });
+  const notes = basis === "elastic" ? ["AISC 360-22 Chapters F and G apply to I-shapes here; this section is checked elastically against your allowables."] : [];
+  return { ok: true, rows, resolved, notes };
 }

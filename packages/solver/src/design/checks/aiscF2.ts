@@ -51,6 +51,7 @@ export interface F2CheckInput {
   /** Default 200 GPa. */ readonly E?: number;
   /** Unbraced length of the compression flange, m. */ readonly Lb: number;
   /** From eq. F1-1 (see `cbFromFunction`); 1.0 is always permitted. */ readonly Cb: number;
+  /** Where Cb came from, shown beside it; default eq. F1-1. */ readonly CbBasis?: "F1-1" | "taken as 1.0";
   /** Required flexural strength Mu (LRFD) or Ma (ASD), N·m; sign ignored. */ readonly Mr: number;
   readonly method: DesignMethod;
 }
@@ -80,7 +81,7 @@ export function checkAiscF2Flexure(input: F2CheckInput): CheckResult {
     { symbol: "bf/2tf", description: "flange slenderness (Table B4.1b case 10)", value: flange.lambda, unit: "" },
     { symbol: "h/tw", description: "web slenderness (Table B4.1b case 15)", value: web.lambda, unit: "" },
     { symbol: "Lb", description: "unbraced length", value: input.Lb, unit: "m" },
-    { symbol: "Cb", description: "LTB modification factor (F1-1)", value: input.Cb, unit: "" },
+    { symbol: "Cb", description: `LTB modification factor (${input.CbBasis ?? "F1-1"})`, value: input.Cb, unit: "" },
   ];
   const base = { id: "aisc360-22-f2", title: `Flexure, AISC 360-22 §F2 (${input.method})`, inputs };
   if (flange.class !== "compact" || web.class !== "compact") {

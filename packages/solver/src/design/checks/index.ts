@@ -8,3 +8,4 @@ export * from "./aiscF2.js";
 export * from "./aiscG2.js";
 export * from "./steelBeamChecks.js";
 export * from "./resultStations.js";
+export * from "./beamChecks.js";

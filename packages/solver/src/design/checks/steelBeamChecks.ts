@@ -24,6 +24,12 @@ export interface SpanRef {
   readonly supportAt?: "left" | "right";
 }
 
+/**
+ * How Cb is found: by eq. F1-1 from the moment diagram of each unbraced segment, or taken as 1.0,
+ * which AISC 360-22 §F1 always permits as conservative (from memory).
+ */
+export type CbRule = "equation-f1-1" | "unity";
+
 export interface SteelBeamCheckInput {
   readonly shape: IShape;
   readonly properties?: Partial<IShapeLtbProperties>;
@@ -38,6 +44,8 @@ export interface SteelBeamCheckInput {
   readonly strength: readonly { readonly id: string; readonly stations: readonly StationLike[] }[];
   /** Cases or combinations to check for deflection, each with its limit. */
   readonly deflection: readonly { readonly id: string; readonly stations: readonly StationLike[]; readonly limit: DeflectionLimit }[];
+  /** Default "equation-f1-1". */
+  readonly cb?: CbRule;
 }
 
 export interface SpanCheckRow {
@@ -72,8 +80,9 @@ export function steelBeamChecks(input: SteelBeamCheckInput): SpanCheckRow[] {
         const seg = within(combo.stations, xa, xb);
         if (seg.length === 0) continue;
         const Mr = Math.max(...seg.map((s) => Math.abs(s.M)));
-        const { Cb } = cbFromSamples(seg, xa, xb);
-        const check = checkAiscF2Flexure({ shape, properties: input.properties, Fy: input.Fy, E: input.E, Lb: xb - xa, Cb, Mr, method: input.method });
+        const unity = input.cb === "unity";
+        const Cb = unity ? 1 : cbFromSamples(seg, xa, xb).Cb;
+        const check = checkAiscF2Flexure({ shape, properties: input.properties, Fy: input.Fy, E: input.E, Lb: xb - xa, Cb, ...(unity ? { CbBasis: "taken as 1.0" as const } : {}), Mr, method: input.method });
         rows.push({ span: span.label, caseId: combo.id, x1: xa, x2: xb, check });
       }
       const inSpan = within(combo.stations, span.x1, span.x2);
