@@ -24,5 +24,7 @@ export default defineConfig({
     outDir: "dist",
     emptyOutDir: true,
     sourcemap: true,
+    // dist/.vite/manifest.json: which chunks each page loads (`pnpm firstpaint` reports their sizes)
+    manifest: true,
   },
 });
