@@ -44,13 +44,8 @@ const pageTimeoutMs = 60_000;
 // What the page records: injected before any of the app's scripts, it looks at every animation
 // frame for the two canvases and keeps the first moment each has drawn pixels.
 
-declare global {
-  interface Window {
-    __firstPaint?: { canvas: number | null; diagrams: number | null };
-  }
-}
-
 // Plain JavaScript text, not a function: tsx would add helpers (__name) the page does not have.
+// It sets window.__firstPaint = { canvas, diagrams } (ms since the navigation started, or null).
 const probe = `(() => {
   const marks = { canvas: null, diagrams: null };
   window.__firstPaint = marks;
@@ -215,17 +210,15 @@ async function measureOnce(browser: Browser, baseUrl: string, beamPath: string, 
     const page = await context.newPage();
     await page.addInitScript({ content: probe });
     await page.goto(beamPath, { waitUntil: "commit" });
-    await page.waitForFunction(() => window.__firstPaint?.canvas != null && window.__firstPaint?.diagrams != null, null, { timeout: pageTimeoutMs, polling: 100 });
+    // strings, not functions: they run in the page (no DOM types here, and no tsx helpers there)
+    await page.waitForFunction("window.__firstPaint.canvas !== null && window.__firstPaint.diagrams !== null", null, { timeout: pageTimeoutMs, polling: 100 });
     await page.getByRole("heading", { level: 1, name: beamName }).waitFor();
-    const marks = await page.evaluate(() => window.__firstPaint!);
-    const requests = await page.evaluate(() =>
-      performance.getEntriesByType("resource").map((e) => {
-        const r = e as PerformanceResourceTiming;
-        return { name: new URL(r.name).pathname, start: r.startTime, end: r.responseEnd, bytes: r.transferSize };
-      }),
-    );
+    const marks = (await page.evaluate("window.__firstPaint")) as { canvas: number; diagrams: number };
+    const requests = (await page.evaluate(
+      `performance.getEntriesByType("resource").map((r) => ({ name: new URL(r.name).pathname, start: r.startTime, end: r.responseEnd, bytes: r.transferSize }))`,
+    )) as RunFigures["requests"];
     await page.close();
-    return { canvas: marks.canvas!, diagrams: marks.diagrams!, requests };
+    return { canvas: marks.canvas, diagrams: marks.diagrams, requests };
   } finally {
     await context.close();
   }
