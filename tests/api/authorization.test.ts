@@ -57,6 +57,10 @@ const calls: Record<RouteName, (f: Fixture) => Call> = {
   getBeam: (f) => ({ params: { projectId: f.projectId, beamId: f.beamId } }),
   renameBeam: (f) => ({ params: { projectId: f.projectId, beamId: f.beamId }, body: { name: "Renamed beam" } }),
   deleteBeam: (f) => ({ params: { projectId: f.projectId, beamId: f.beamId } }),
+  updateBeamDesign: (f) => ({
+    params: { projectId: f.projectId, beamId: f.beamId },
+    body: { designSettings: { section: { source: "project", sectionId: f.sectionId }, material: null, method: "LRFD", lb: null, cb: "equation-f1-1", strengthIds: null, deflection: null, allowableBending: null, allowableShear: null } },
+  }),
   listRevisions: (f) => ({ params: { projectId: f.projectId, beamId: f.beamId } }),
   saveRevision: (f) => ({ params: { projectId: f.projectId, beamId: f.beamId }, body: { baseVersion: 1, model: twoSpanModel(-2e4) } }),
   getRevision: (f) => ({ params: { projectId: f.projectId, beamId: f.beamId, version: 1 } }),
@@ -117,6 +121,7 @@ const expectedAccess: Record<RouteName, "public" | "signed-in" | "owner-of-any-p
   getBeam: "read",
   renameBeam: "edit",
   deleteBeam: "edit",
+  updateBeamDesign: "edit",
   listRevisions: "read",
   saveRevision: "edit",
   getRevision: "read",

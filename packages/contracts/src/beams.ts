@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { beamDesignSettingsSchema } from "./beamDesign.js";
 
 export const beamIdSchema = z.string().uuid();
 export const revisionStatusSchema = z.enum(["draft", "checked", "issued"]);
@@ -67,8 +68,11 @@ export type CheckRevisionRequest = z.infer<typeof checkRevisionRequestSchema>;
 
 export const beamListResponseSchema = z.object({ beams: z.array(beamSchema) });
 export type BeamListResponse = z.infer<typeof beamListResponseSchema>;
-/** Create (201) and get (200): the beam with its latest revision. */
-export const beamResponseSchema = z.object({ beam: beamSchema, revision: revisionSchema });
+/**
+ * Create (201) and get (200): the beam with its latest revision, and its saved design settings
+ * (null: none saved yet; absent from answers that predate them, e.g. an import).
+ */
+export const beamResponseSchema = z.object({ beam: beamSchema, revision: revisionSchema, designSettings: beamDesignSettingsSchema.nullable().optional() });
 export type BeamResponse = z.infer<typeof beamResponseSchema>;
 export const revisionListResponseSchema = z.object({ revisions: z.array(revisionSummarySchema) });
 export type RevisionListResponse = z.infer<typeof revisionListResponseSchema>;

@@ -4,6 +4,7 @@ export * from "./auth.js";
 export * from "./projects.js";
 export * from "./beams.js";
 export * from "./sections.js";
+export * from "./beamDesign.js";
 export * from "./reactions.js";
 export * from "./handoffs.js";
 export * from "./imports.js";

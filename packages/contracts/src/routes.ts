@@ -47,6 +47,8 @@ export const apiRoutes = {
   getBeam: { method: "GET", path: "/api/projects/:projectId/beams/:beamId", access: "read", status: 200 },
   renameBeam: { method: "PATCH", path: "/api/projects/:projectId/beams/:beamId", access: "edit", status: 200 },
   deleteBeam: { method: "DELETE", path: "/api/projects/:projectId/beams/:beamId", access: "edit", status: 204 },
+  /** Replaces the beam's saved design settings (body `{ designSettings }`, null clears them). */
+  updateBeamDesign: { method: "PATCH", path: "/api/projects/:projectId/beams/:beamId/design-settings", access: "edit", status: 200 },
 
   listRevisions: { method: "GET", path: "/api/projects/:projectId/beams/:beamId/revisions", access: "read", status: 200 },
   saveRevision: { method: "POST", path: "/api/projects/:projectId/beams/:beamId/revisions", access: "edit", status: 201 },

@@ -14,6 +14,7 @@ export type AuditAction =
   | "beam.created"
   | "beam.renamed"
   | "beam.deleted"
+  | "beam.design-settings-saved"
   | "revision.saved"
   | "revision.checked"
   | "revision.issued"

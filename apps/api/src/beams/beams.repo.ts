@@ -1,5 +1,5 @@
 import { and, asc, eq } from "drizzle-orm";
-import type { Beam } from "@spanwright/contracts";
+import type { Beam, BeamDesignSettings } from "@spanwright/contracts";
 import type { Db } from "../db/client.js";
 import { beams } from "../db/schema.js";
 
@@ -56,4 +56,14 @@ export async function advanceVersion(db: Db, beamId: string, baseVersion: number
     .where(and(eq(beams.id, beamId), eq(beams.latestVersion, baseVersion)))
     .returning({ id: beams.id });
   return rows.length > 0;
+}
+
+/** The beam's saved design settings as stored (validated when written); null when none. */
+export async function findDesignSettings(db: Db, beamId: string): Promise<unknown> {
+  const [row] = await db.select({ designSettings: beams.designSettings }).from(beams).where(eq(beams.id, beamId));
+  return row?.designSettings ?? null;
+}
+
+export async function setDesignSettings(db: Db, beamId: string, settings: BeamDesignSettings | null, now: Date): Promise<void> {
+  await db.update(beams).set({ designSettings: settings, updatedAt: now }).where(eq(beams.id, beamId));
 }

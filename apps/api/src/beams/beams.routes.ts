@@ -2,6 +2,8 @@ import {
   apiRoutes,
   createBeamRequestSchema,
   renameBeamRequestSchema,
+  updateBeamDesignRequestSchema,
+  type BeamDesignResponse,
   type BeamListResponse,
   type BeamResponse,
 } from "@spanwright/contracts";
@@ -37,6 +39,14 @@ export function registerBeamRoutes(router: Router, beams: BeamsService): void {
     const beamId = parseId(req.params.beamId, "beam");
     const { name } = parseRequest(renameBeamRequestSchema, req.body);
     res.json((await beams.rename(user.id, projectId, beamId, name)) satisfies BeamResponse);
+  });
+
+  router.patch(apiRoutes.updateBeamDesign.path, async (req, res) => {
+    const { user } = requireAuth(res);
+    const projectId = parseId(req.params.projectId, "project");
+    const beamId = parseId(req.params.beamId, "beam");
+    const body = parseRequest(updateBeamDesignRequestSchema, req.body);
+    res.json((await beams.updateDesign(user.id, projectId, beamId, body)) satisfies BeamDesignResponse);
   });
 
   router.delete(apiRoutes.deleteBeam.path, async (req, res) => {

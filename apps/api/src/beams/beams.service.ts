@@ -1,4 +1,4 @@
-import type { Beam, BeamResponse, CreateBeamRequest } from "@spanwright/contracts";
+import type { Beam, BeamDesignResponse, BeamResponse, CreateBeamRequest, UpdateBeamDesignRequest } from "@spanwright/contracts";
 import { authorize } from "../access/access.js";
 import { recordAudit } from "../audit/audit.repo.js";
 import type { Clock } from "../clock.js";
@@ -7,6 +7,7 @@ import { AppError } from "../http/appError.js";
 import { findRevision, insertRevisionWithResult } from "../revisions/revisions.repo.js";
 import { runSolver, type Engine } from "../solve/engine.js";
 import * as repo from "./beams.repo.js";
+import { checkDesignSettings, readDesignSettings } from "./designSettings.js";
 
 export function createBeamsService(deps: { db: Db; clock: Clock; engine: Engine }) {
   const { db, clock, engine } = deps;
@@ -21,7 +22,7 @@ export function createBeamsService(deps: { db: Db; clock: Clock; engine: Engine 
     const revision = await findRevision(tx, beam.id, beam.latestVersion);
     if (!revision) throw new Error(`beam ${beam.id} has no revision ${beam.latestVersion}`);
     const { id: _rowId, ...publicRevision } = revision;
-    return { beam, revision: publicRevision };
+    return { beam, revision: publicRevision, designSettings: readDesignSettings(await repo.findDesignSettings(tx, beam.id)) };
   }
 
   return {
@@ -66,6 +67,18 @@ export function createBeamsService(deps: { db: Db; clock: Clock; engine: Engine 
         await recordAudit(tx, { projectId, actorId, action: "beam.renamed", details: { beamId, name } });
       });
       return withLatest(db, await requireBeam(db, projectId, beamId));
+    },
+
+    /** Replaces the saved design settings whole; nothing is written when they are refused. */
+    async updateDesign(actorId: string, projectId: string, beamId: string, input: UpdateBeamDesignRequest): Promise<BeamDesignResponse> {
+      await authorize(db, projectId, actorId, "edit");
+      await requireBeam(db, projectId, beamId);
+      const settings = input.designSettings === null ? null : await checkDesignSettings(db, projectId, input.designSettings);
+      await inTransaction(db, async (tx) => {
+        await repo.setDesignSettings(tx, beamId, settings, clock.now());
+        await recordAudit(tx, { projectId, actorId, action: "beam.design-settings-saved", details: { beamId, cleared: settings === null } });
+      });
+      return { designSettings: readDesignSettings(await repo.findDesignSettings(db, beamId)) };
     },
 
     async remove(actorId: string, projectId: string, beamId: string): Promise<void> {

@@ -95,6 +95,12 @@ export const beams = pgTable(
     name: text("name").notNull(),
     /** Denormalised latest revision number: the optimistic-concurrency check compares against it. */
     latestVersion: integer("latest_version").notNull(),
+    /**
+     * The design choices of the member checks (`BeamDesignSettings` of @spanwright/contracts, SI),
+     * validated by the service before they are stored; null until first saved. Not part of any
+     * revision: the report of an old revision prints them against that revision's model.
+     */
+    designSettings: jsonb("design_settings"),
     createdAt: createdAt(),
     updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
   },
