@@ -63,15 +63,19 @@ export const sectionResponseSchema = z.object({ section: projectSectionSchema })
 export type SectionResponse = z.infer<typeof sectionResponseSchema>;
 
 /**
- * Query of the calculation report: `sectionId` names the project section whose member checks it
- * prints (none: no checks, since revisions do not store sections); `method` says how the model's
+ * Query of the calculation report. The beam's saved design settings (`BeamDesignSettings`) are the
+ * base; each parameter given replaces its part of them: `sectionId` names the project section
+ * whose member checks it prints (with that section's own material); `method` says how the model's
  * combinations are read (AISC 360-22 §B3: LRFD or ASD); `lb` is the unbraced length of the
- * compression flange in metres, braces every `lb` from the start of each span (none: braced at the
- * supports only). Query strings arrive as text, hence the coercion.
+ * compression flange in metres, braces every `lb` from the start of each span; `cb` how Cb is found.
+ * Without saved settings and without `sectionId` the report has no checks (revisions do not store
+ * sections); without a saved or given method it is LRFD, without `lb` braced at the supports only.
+ * Query strings arrive as text, hence the coercion.
  */
 export const reportQuerySchema = z.object({
   sectionId: sectionIdSchema.optional(),
-  method: z.enum(["LRFD", "ASD"]).default("LRFD"),
+  method: z.enum(["LRFD", "ASD"]).optional(),
   lb: z.coerce.number().positive().finite().optional(),
+  cb: z.enum(["equation-f1-1", "unity"]).optional(),
 });
 export type ReportQuery = z.infer<typeof reportQuerySchema>;

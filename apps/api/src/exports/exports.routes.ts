@@ -7,7 +7,7 @@ import { parseRequest } from "../http/validate.js";
 import { loadRevisionContext } from "../revisions/revisionContext.js";
 import { parseVersion } from "../revisions/revisions.routes.js";
 import type { SectionsService } from "../sections/sections.service.js";
-import { memberChecks } from "./memberChecks.js";
+import { reportChecks } from "./reportChecks.js";
 import { revisionCsv, revisionPdf, type RevisionFile } from "./revisionFiles.js";
 
 function sendAttachment(res: Response, file: RevisionFile): void {
@@ -38,7 +38,6 @@ export function registerExportRoutes(router: Router, db: Db, sections: SectionsS
     const ids = idsOf(req.params);
     const query = parseRequest(reportQuerySchema, req.query, "query");
     const ctx = await loadRevisionContext(db, user.id, ids);
-    const section = query.sectionId ? await sections.get(user.id, ids.projectId, query.sectionId) : null;
-    sendAttachment(res, await revisionPdf(ctx, section ? memberChecks(ctx.model, section, query.method, query.lb ?? null) : undefined));
+    sendAttachment(res, await revisionPdf(ctx, await reportChecks(db, sections, user.id, ctx, query)));
   });
 }

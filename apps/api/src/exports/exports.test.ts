@@ -158,6 +158,39 @@ describe("calculation report PDF with member checks", () => {
     expect(unbraced).not.toContain("171.58 kN·m");
   });
 
+  it("prints the beam's saved design settings by default, each query parameter replacing its part", async () => {
+    const { engineer, viewer, revisions, beamPath } = await teamProject(t);
+    const designSettings = {
+      section: { source: "typed", name: "I-300 saved", shape: iShape },
+      material: steel,
+      method: "ASD",
+      lb: 1,
+      cb: "unity",
+      strengthIds: null,
+      deflection: [{ limit: { kind: "ratio", ratio: 300 }, ids: ["L"] }],
+      allowableBending: null,
+      allowableShear: null,
+    };
+    expect((await engineer.client.patch(`${beamPath}/design-settings`, { designSettings })).status).toBe(200);
+    const text = async (query: string) => {
+      const res = await viewer.client.get(`${revisions}/1/report.pdf${query}`).buffer(true).parse(binary);
+      expect(res.status).toBe(200);
+      return (await extractPdfText(res.body as Buffer)).join("\n").replace(/\s+/g, " ");
+    };
+    const saved = await text("");
+    expect(saved).toContain("I-300 saved (i-shape, depth 300 mm), Steel (demo)");
+    expect(saved).toContain("AISC 360-22 ASD, Cb taken as 1.0");
+    expect(saved).toContain("every Lb = 1 m");
+    // the saved limit, not the fixed L/360 and L/240 of the IBC floor presets
+    expect(saved).toContain("deflection L/300 for L");
+    expect(saved).not.toContain("L/240");
+    expect(saved).toContain("Code editions used");
+    expect(saved).toContain("licensed engineer");
+    const overridden = await text("?method=LRFD&lb=2.5");
+    expect(overridden).toContain("AISC 360-22 LRFD, Cb taken as 1.0");
+    expect(overridden).toContain("every Lb = 2.5 m");
+  });
+
   it("refuses an lb that is not a positive number, naming the field", async () => {
     const { viewer, revisions } = await teamProject(t);
     for (const lb of ["0", "-2", "abc", "Infinity"]) {

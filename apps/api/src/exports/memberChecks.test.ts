@@ -25,7 +25,7 @@ const VMAX = 62_500;
 
 describe("memberChecks", () => {
   it("checks an I-shape by AISC F2 and G2 per span for each combination, and deflection for live and service D+L", () => {
-    const { rows, basis } = memberChecks(model, { name: "I-300", shape: { kind: "i-shape", d: 0.3, bf: 0.15, tf: 0.01, tw: 0.006 }, material: steel }, "LRFD");
+    const { rows, basis } = memberChecks(model, { name: "I-300", shape: { kind: "i-shape", d: 0.3, bf: 0.15, tf: 0.01, tw: 0.006 }, material: steel }, { method: "LRFD" });
     expect(rows.map((r) => `${r.span} ${r.caseId} ${r.check.id}`)).toEqual([
       expect.stringMatching(/^1 C1 aisc360-22-f2/), expect.stringMatching(/^1 C1 aisc360-22-g2/), "1 L deflection", `1 ${SERVICE_COMBINATION_ID} deflection`,
       expect.stringMatching(/^2 C1 aisc360-22-f2/), expect.stringMatching(/^2 C1 aisc360-22-g2/), "2 L deflection", `2 ${SERVICE_COMBINATION_ID} deflection`,
@@ -43,7 +43,7 @@ describe("memberChecks", () => {
   });
 
   it("checks any other shape elastically against 0.6·Fy and 0.4·Fy", () => {
-    const { rows, basis } = memberChecks(model, { name: "R 200x400", shape: { kind: "rectangle", b: 0.2, h: 0.4 }, material: steel }, "LRFD");
+    const { rows, basis } = memberChecks(model, { name: "R 200x400", shape: { kind: "rectangle", b: 0.2, h: 0.4 }, material: steel }, { method: "LRFD" });
     const bending = rows.find((r) => r.span === "1" && r.check.id === "elastic-bending-stress")!.check;
     const shear = rows.find((r) => r.span === "1" && r.check.id === "elastic-shear-stress")!.check;
     // σ = M·c/I = 62.5e3 · 0.2 / (0.2·0.4³/12) = 11.72 MPa; τ = 1.5·V/A = 1.5·62.5e3/0.08 = 1.172 MPa (rectangle, closed form)
@@ -56,9 +56,22 @@ describe("memberChecks", () => {
 
   it("checks only deflections when the material gives no Fy", () => {
     const timber: Material = { id: "t", name: "Glulam (demo)", kind: "timber", E: 11e9, typical: true, note: "", source: "demo" };
-    const { rows, basis } = memberChecks(model, { name: "GL", shape: { kind: "rectangle", b: 0.2, h: 0.4 }, material: timber }, "LRFD");
+    const { rows, basis } = memberChecks(model, { name: "GL", shape: { kind: "rectangle", b: 0.2, h: 0.4 }, material: timber }, { method: "LRFD" });
     expect(new Set(rows.map((r) => r.check.id))).toEqual(new Set(["deflection"]));
     expect(basis).toContain("only deflections");
+  });
+
+  it("uses the deflection limits and cases chosen, and names chosen ids the revision lacks", () => {
+    const limit = { kind: "ratio" as const, ratio: 300 };
+    const { rows, basis } = memberChecks(model, { name: "I-300", shape: { kind: "i-shape", d: 0.3, bf: 0.15, tf: 0.01, tw: 0.006 }, material: steel }, {
+      method: "LRFD", strengthIds: ["C1", "C9"], deflection: [{ limit, ids: ["L", "gone"] }],
+    });
+    const deflections = rows.filter((r) => r.check.id === "deflection");
+    expect(deflections.map((r) => `${r.span} ${r.caseId}`)).toEqual(["1 L", "2 L"]);
+    // L/300 of a 5 m span = 16.7 mm (typed ratio)
+    expect(deflections.map((r) => (r.check.status === "not-covered" ? NaN : r.check.capacity))).toEqual([5 / 300, 5 / 300]);
+    expect(basis).toContain("deflection L/300 for L");
+    expect(basis).toContain("not in this revision, so not checked: C9, gone");
   });
 
   describe("with an unbraced length Lb", () => {
@@ -66,7 +79,7 @@ describe("memberChecks", () => {
     // The same loads over two 10 m spans, where lateral-torsional buckling governs without braces.
     const long: BeamModel = { ...model, nodes: [0, 10, 20].map((x) => ({ x, support: { type: "pinned" as const } })) };
     const f2Capacities = (m: BeamModel, Lb: number | null) =>
-      memberChecks(m, { name: "I-300", shape: iShape, material: steel }, "LRFD", Lb).rows.filter((r) => r.check.id.startsWith("aisc360-22-f2")).map((r) => (r.check.status === "not-covered" ? NaN : r.check.capacity));
+      memberChecks(m, { name: "I-300", shape: iShape, material: steel }, { method: "LRFD", Lb }).rows.filter((r) => r.check.id.startsWith("aisc360-22-f2")).map((r) => (r.check.status === "not-covered" ? NaN : r.check.capacity));
     const capacityOfF2 = (Lb: number | null) => f2Capacities(model, Lb)[0]!;
     // Hand check (AISC 360-22 F2, compact flanges bf/2tf = 7.5 < 0.38·√(E/Fy) = 9.15 and web
     // h/tw = 46.7 < 3.76·√(E/Fy) = 90.5, Table B4.1b): Zx = bf·tf·(d − tf) + tw·(d − 2tf)²/4
@@ -93,7 +106,7 @@ describe("memberChecks", () => {
       const bracePoints = bracePointsEvery(spans, Lb);
       const solved = solve({ ...model, stations: checkStations([0, 5, 10], bracePoints) });
       const direct = steelBeamChecks({ shape: iShape, Fy: 345e6, E: 200e9, method: "LRFD", spans, bracePoints, strength: [{ id: "C1", stations: stationsFromResult(solved, "C1") }], deflection: [] });
-      const { rows, basis } = memberChecks(model, { name: "I-300", shape: iShape, material: steel }, "LRFD", Lb);
+      const { rows, basis } = memberChecks(model, { name: "I-300", shape: iShape, material: steel }, { method: "LRFD", Lb });
       const f2 = (r: { check: { id: string } }) => r.check.id.startsWith("aisc360-22-f2");
       expect(rows.filter(f2).map((r) => r.check)).toEqual(direct.filter(f2).map((r) => r.check));
       expect(capacityOfF2(Lb)).not.toBeCloseTo(capacityOfF2(null), -2);

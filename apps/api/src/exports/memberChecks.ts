@@ -6,6 +6,8 @@ import {
   checkStationsForSpans,
   propertiesOfValidShape,
   stationsFromResult,
+  type CbRule,
+  type DeflectionLimit,
   type DesignMethod,
   type Material,
   type SectionShape,
@@ -42,15 +44,51 @@ const preset = (id: string) => {
 const BENDING_ALLOWABLE_OF_FY = 0.6;
 const SHEAR_ALLOWABLE_OF_FY = 0.4;
 
+/** A deflection limit and the load cases or combinations it applies to. */
+export interface DeflectionRuleChoice {
+  readonly limit: DeflectionLimit;
+  readonly ids: readonly string[];
+}
+
+/** How the checks read the model; everything but `method` has the report's long-standing default. */
+export interface MemberCheckOptions {
+  readonly method: DesignMethod;
+  /** Brace spacing of the compression flange from each span's start, m; null (default): at the supports only. */
+  readonly Lb?: number | null;
+  readonly cb?: CbRule;
+  /** Cases or combinations for the strength checks; null (default): every combination, or the load cases when there are none. */
+  readonly strengthIds?: readonly string[] | null;
+  /** Deflection limits; null (default): L/360 for each live case and L/240 for the unfactored dead + live sum (IBC floor presets). */
+  readonly deflection?: readonly DeflectionRuleChoice[] | null;
+  /** Allowables of the elastic checks, Pa; null (default): 0.6·Fy and 0.4·Fy when the material gives Fy. */
+  readonly allowableBending?: number | null;
+  readonly allowableShear?: number | null;
+}
+
+function limitText(limit: DeflectionLimit): string {
+  switch (limit.kind) {
+    case "preset":
+      return `L/${limit.preset.ratio}`;
+    case "ratio":
+      return `L/${limit.ratio}`;
+    case "absolute":
+      return `${Number((limit.value * 1000).toPrecision(4))} mm`;
+    default:
+      return ((never: never) => never)(limit);
+  }
+}
+const Pa = (pa: number) => `${Number((pa / 1e6).toPrecision(4))} MPa`;
+
 /**
- * The report's member checks for one project section on a beam: spans from the supports, braced
- * at the supports and every `Lb` metres from the start of each span (null: at the supports only,
- * Lb = span); strength from the model's combinations (or its load cases when
- * it has none), all pattern pieces loaded; deflection L/360 for each live case and L/240 for the
- * unfactored sum of dead and live cases (IBC floor presets). A doubly symmetric I-shape is checked
- * by AISC 360-22 F2 and G2; any other shape elastically against 0.6·Fy and 0.4·Fy when Fy is known.
+ * The report's member checks for one section on a beam (`assembleBeamChecks`, as the Checks tab):
+ * spans from the supports, braced at the supports and every `Lb` metres from the start of each
+ * span; strength from the chosen cases or combinations, all pattern pieces loaded; deflection
+ * limits as chosen. A doubly symmetric I-shape is checked by AISC 360-22 F2 and G2; any other
+ * shape elastically against the allowables (0.6·Fy and 0.4·Fy unless given).
  */
-export function memberChecks(model: BeamModel, section: CheckedSection, method: DesignMethod, Lb: number | null = null): MemberChecks {
+export function memberChecks(model: BeamModel, section: CheckedSection, options: MemberCheckOptions): MemberChecks {
+  const { method } = options;
+  const Lb = options.Lb ?? null;
   const spans: SpanRef[] = listSpans(model).map((s, i, all) => ({
     label: String(s.number),
     x1: s.x1,
@@ -58,29 +96,44 @@ export function memberChecks(model: BeamModel, section: CheckedSection, method: 
     kind: s.overhang ? "cantilever" : "span",
     ...(s.overhang ? { supportAt: i === 0 && all.length > 1 ? ("right" as const) : ("left" as const) } : {}),
   }));
+  const known = new Set([...model.loadCases.map((c) => c.id), ...model.combinations.map((c) => c.id)]);
   const dead = model.loadCases.filter((c) => c.category === "dead").map((c) => c.id);
   const live = model.loadCases.filter((c) => c.category === "live").map((c) => c.id);
-  const service = dead.length > 0 && live.length > 0 ? [{ id: SERVICE_COMBINATION_ID, factors: Object.fromEntries([...dead, ...live].map((id) => [id, 1])) }] : [];
+  const rules = options.deflection ?? null;
+  const service = rules === null && dead.length > 0 && live.length > 0 ? [{ id: SERVICE_COMBINATION_ID, factors: Object.fromEntries([...dead, ...live].map((id) => [id, 1])) }] : [];
   const braces = bracePointsEvery(spans, Lb);
   const solved = solve({ ...model, combinations: [...model.combinations, ...service], stations: checkStationsForSpans(spans, Lb) });
   const at = (id: string) => stationsFromResult(solved, id);
 
-  const strengthIds = model.combinations.length > 0 ? model.combinations.map((c) => c.id) : model.loadCases.filter((c) => c.category !== "settlement").map((c) => c.id);
-  const strength = strengthIds.map((id) => ({ id, stations: at(id) }));
-  const deflection = [
-    ...live.map((id) => ({ id, stations: at(id), limit: preset("floor-live") })),
-    ...service.map((c) => ({ id: c.id, stations: at(c.id), limit: preset("floor-total") })),
-  ];
+  const defaultStrength = model.combinations.length > 0 ? model.combinations.map((c) => c.id) : model.loadCases.filter((c) => c.category !== "settlement").map((c) => c.id);
+  const chosenStrength = options.strengthIds ?? defaultStrength;
+  const missing = new Set([...chosenStrength, ...(rules ?? []).flatMap((r) => r.ids)].filter((id) => !known.has(id)));
+  const strength = chosenStrength.filter((id) => known.has(id)).map((id) => ({ id, stations: at(id) }));
+  const deflection =
+    rules === null
+      ? [
+          ...live.map((id) => ({ id, stations: at(id), limit: preset("floor-live") })),
+          ...service.map((c) => ({ id: c.id, stations: at(c.id), limit: preset("floor-total") })),
+        ]
+      : rules.flatMap((r) => r.ids.filter((id) => known.has(id)).map((id) => ({ id, stations: at(id), limit: r.limit })));
 
   const { shape, material } = section;
   const props = propertiesOfValidShape(shape);
   const Fy = material.Fy;
-  const mpa = (pa: number) => `${Number((pa / 1e6).toPrecision(4))} MPa`;
-  const describe = `${section.name} (${shape.kind}, depth ${Number((props.depth * 1000).toPrecision(4))} mm), ${material.name}, E = ${Number((material.E / 1e9).toPrecision(4))} GPa${Fy ? `, Fy = ${mpa(Fy)}` : ""}`;
+  const describe = `${section.name} (${shape.kind}, depth ${Number((props.depth * 1000).toPrecision(4))} mm), ${material.name}, E = ${Number((material.E / 1e9).toPrecision(4))} GPa${Fy ? `, Fy = ${Pa(Fy)}` : ""}`;
   const cases = model.combinations.length > 0 ? `combinations taken as ${method} load combinations` : "unfactored load cases (the model has no combinations)";
   const bracing = Lb === null ? "braced at the supports only (Lb = span)" : `braced at the supports and every Lb = ${Number(Lb.toPrecision(4))} m from the start of each span`;
-  const common = `${cases}, all pattern pieces loaded; compression flange ${bracing}`;
+  const limits =
+    rules === null
+      ? "deflection L/360 under each live case and L/240 under unfactored dead + live (IBC floor members)"
+      : rules.length === 0
+        ? "no deflection limits chosen"
+        : `deflection ${rules.map((r) => `${limitText(r.limit)} for ${r.ids.filter((id) => known.has(id)).join(", ") || "nothing"}`).join("; ")}`;
+  const skipped = missing.size > 0 ? `; not in this revision, so not checked: ${[...missing].join(", ")}` : "";
+  const common = `${cases}, all pattern pieces loaded; compression flange ${bracing}; ${limits}${skipped}`;
 
+  const allowableBending = options.allowableBending ?? (Fy === undefined ? null : BENDING_ALLOWABLE_OF_FY * Fy);
+  const allowableShear = options.allowableShear ?? (Fy === undefined ? null : SHEAR_ALLOWABLE_OF_FY * Fy);
   const { basis, rows } = assembleBeamChecks({
     shape,
     material,
@@ -89,14 +142,17 @@ export function memberChecks(model: BeamModel, section: CheckedSection, method: 
     bracePoints: braces,
     strength,
     deflection,
-    allowableBending: Fy === undefined ? null : BENDING_ALLOWABLE_OF_FY * Fy,
-    allowableShear: Fy === undefined ? null : SHEAR_ALLOWABLE_OF_FY * Fy,
+    allowableBending,
+    allowableShear,
+    ...(options.cb ? { cb: options.cb } : {}),
   });
-  const assumptions =
-    basis === "aisc-360-22"
-      ? `AISC 360-22 ${method}; ${common}`
-      : Fy !== undefined
-        ? `elastic stresses against 0.6·Fy in bending and 0.4·Fy in shear (common practice; conservative under factored combinations); ${common}`
-        : "the material gives no Fy, so only deflections are checked";
+  const userAllowables = options.allowableBending != null || options.allowableShear != null;
+  const elastic =
+    allowableBending === null && allowableShear === null
+      ? `no allowable stress${Fy === undefined ? " and no Fy in the material" : ""}, so only deflections are checked`
+      : userAllowables
+        ? `elastic stresses against the allowables chosen (${[allowableBending !== null ? `bending ${Pa(allowableBending)}` : "", allowableShear !== null ? `shear ${Pa(allowableShear)}` : ""].filter(Boolean).join(", ")})`
+        : "elastic stresses against 0.6·Fy in bending and 0.4·Fy in shear (common practice; conservative under factored combinations)";
+  const assumptions = basis === "aisc-360-22" ? `AISC 360-22 ${method}${options.cb === "unity" ? ", Cb taken as 1.0" : ""}; ${common}` : `${elastic}; ${common}`;
   return { rows: rows.map(({ span, caseId, check }) => ({ span, caseId, check })), basis: `${describe}; ${assumptions}` };
 }
