@@ -103,6 +103,11 @@ function referenceLoop(): number {
   }, 9, 2);
 }
 
+if (process.env.SPANWRIGHT_BENCH_PART === "interactive") {
+  // the second run of bench/run.mjs: the same interactive case under V8's default heap sizes
+  interactive();
+  process.exit(0);
+}
 const reference = referenceLoop();
 const { median: single, fastest } = singleCase();
 const growth = single[2000]! / single[200]!;

@@ -51,6 +51,12 @@ export function placeStations(grid: Float64Array, stations: number[]): StationPl
 }
 
 /*
+ * The layout constants are read into locals once per call: as imported bindings inside the hot
+ * loops they made the station loops several times slower under Node's ESM loader.
+ */
+const LAYOUT = [COEFFICIENTS_PER_INTERVAL, V_OFFSET, M_OFFSET, UY_OFFSET, RZ_OFFSET] as const;
+
+/*
  * Rows are built by constructors, not object literals: V8 tracks literal allocation sites and,
  * seeing tens of thousands of rows survive, moves them to old-space allocation, which made the
  * full result several times slower. The rows are still plain data (own enumerable numbers only,
@@ -81,16 +87,18 @@ class EnvelopeRow implements EnvelopeStationRow {
 /** V, M, uy, rz of one curve at every station (Horner inlined: 16 curves × every station). */
 export function curveStationRows(places: StationPlaces, curve: Curve): StationRow[] {
   const c = curve.coef;
-  const rows: StationRow[] = new Array(places.x.length);
+  const { x, k, u: local } = places;
+  const [stride, vAt, mAt, yAt, rAt] = LAYOUT;
+  const rows: StationRow[] = new Array(x.length);
   for (let i = 0; i < rows.length; i++) {
-    const o = places.k[i]! * COEFFICIENTS_PER_INTERVAL;
-    const u = places.u[i]!;
-    const v = o + V_OFFSET;
-    const m = o + M_OFFSET;
-    const y = o + UY_OFFSET;
-    const r = o + RZ_OFFSET;
+    const o = k[i]! * stride;
+    const u = local[i]!;
+    const v = o + vAt;
+    const m = o + mAt;
+    const y = o + yAt;
+    const r = o + rAt;
     rows[i] = new Row(
-      places.x[i]!,
+      x[i]!,
       (c[v + 2]! * u + c[v + 1]!) * u + c[v]!,
       ((c[m + 3]! * u + c[m + 2]!) * u + c[m + 1]!) * u + c[m]!,
       ((((c[y + 5]! * u + c[y + 4]!) * u + c[y + 3]!) * u + c[y + 2]!) * u + c[y + 1]!) * u + c[y]!,
@@ -118,13 +126,14 @@ export function envelopeStationRows(analysis: Analysis, places: StationPlaces, c
   const partsM = parts.subarray(3 * nc, 6 * nc);
   const partsUy = parts.subarray(6 * nc, 9 * nc);
   const n = places.x.length;
+  const [stride, vAt, mAt, yAt] = LAYOUT;
   const rows: EnvelopeStationRow[][] = Array.from({ length: combos.length + 1 }, () => new Array(n));
   for (let s = 0; s < n; s++) {
     const k = places.k[s]!;
     const u = places.u[s]!;
-    evaluateSplitParts(analysis, context.splits.V, k, u, V_OFFSET, 2, partsV);
-    evaluateSplitParts(analysis, context.splits.M, k, u, M_OFFSET, 3, partsM);
-    evaluateSplitParts(analysis, context.splits.uy, k, u, UY_OFFSET, 5, partsUy);
+    evaluateSplitParts(analysis, context.splits.V, k * stride + vAt, k, u, 2, partsV);
+    evaluateSplitParts(analysis, context.splits.M, k * stride + mAt, k, u, 3, partsM);
+    evaluateSplitParts(analysis, context.splits.uy, k * stride + yAt, k, u, 5, partsUy);
     const x = places.x[s]!;
     const star = new EnvelopeRow(x, -Infinity, Infinity, -Infinity, Infinity, -Infinity, Infinity);
     for (let c = 0; c < combos.length; c++) {
@@ -187,18 +196,18 @@ function horner(coef: Float64Array, o: number, degree: number, u: number): numbe
 }
 
 /**
- * Per load case at (k, u): [value, positive part, negative part], as `evaluateCaseParts`, but a
+ * Per load case at (k, u), the quantity's coefficients at `at`: [value, positive part, negative part], as `evaluateCaseParts`, but a
  * patterned case reads the sums of its positive and of its negative pieces from the sign splits
  * (two polynomials instead of one per span piece). Inside a sub-interval no piece changes sign,
  * so the parts are the same sums, added before evaluation instead of after.
  */
-function evaluateSplitParts(analysis: Analysis, splits: (PatternSplit[] | null)[], k: number, u: number, offset: number, degree: number, out: Float64Array): void {
+function evaluateSplitParts(analysis: Analysis, splits: (PatternSplit[] | null)[], at: number, k: number, u: number, degree: number, out: Float64Array): void {
   const cases = analysis.cases;
   const n = degree + 1;
   for (let c = 0; c < cases.length; c++) {
     const perInterval = splits[c];
     if (!perInterval) {
-      const v = horner(cases[c]!.curve.coef, k * COEFFICIENTS_PER_INTERVAL + offset, degree, u);
+      const v = horner(cases[c]!.curve.coef, at, degree, u);
       out[3 * c] = v;
       out[3 * c + 1] = v;
       out[3 * c + 2] = v;
