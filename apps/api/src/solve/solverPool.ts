@@ -1,10 +1,8 @@
 import os from "node:os";
-import { createRequire } from "node:module";
-import path from "node:path";
-import { pathToFileURL } from "node:url";
 import { Worker } from "node:worker_threads";
 import { AppError } from "../http/appError.js";
 import type { Engine } from "./engine.js";
+import { solverWorkerSource } from "./solverWorkerBundle.js";
 
 /** What the pool posts to a solver thread (solveWorker.ts). */
 export interface WorkerTask {
@@ -59,12 +57,12 @@ interface Slot {
   timer: NodeJS.Timeout | null;
 }
 
-const workerEntry = new URL("./solveWorker.ts", import.meta.url).href;
-// The worker runs TypeScript source like the API. Node 20 does not apply `--import tsx` from a
-// worker's execArgv to its entry file, so a small bootstrap registers tsx's hooks (by absolute URL,
-// whatever the current directory) and then imports the entry; the same works under vitest.
-const tsxApi = pathToFileURL(path.join(path.dirname(createRequire(import.meta.url).resolve("tsx/package.json")), "dist/esm/api/index.mjs")).href;
-const bootstrap = `import(${JSON.stringify(tsxApi)}).then((tsx) => { tsx.register(); return import(${JSON.stringify(workerEntry)}); });`;
+/**
+ * A full result is ~10 MB of short-lived row objects; with V8's default young generation they are
+ * copied and promoted mid-solve, which cost more than the solve. 64 MB semi-spaces (192 MB young
+ * generation per thread) keep a result in the nursery until it is sent.
+ */
+const YOUNG_GENERATION_MB = 192;
 
 function solverFailure(reply: Extract<WorkerReply, { ok: false }>["error"]): Error {
   const error = Object.assign(new Error(reply.message), reply.code ? { code: reply.code } : {}, reply.where !== null ? { where: reply.where } : {});
@@ -88,7 +86,7 @@ export function createSolverPool(options: SolverPoolOptions): SolverPool {
   let closed = false;
 
   function spawn(): Slot {
-    const worker = new Worker(bootstrap, { eval: true, execArgv: [] });
+    const worker = new Worker(solverWorkerSource(), { eval: true, execArgv: [], resourceLimits: { maxYoungGenerationSizeMb: YOUNG_GENERATION_MB } });
     const slot: Slot = { worker, ready: false, job: null, timer: null };
     worker.on("message", (reply: WorkerReply | WorkerReady) => {
       if ("ready" in reply) {
