@@ -74,6 +74,21 @@ export async function findRevision(db: Db, beamId: string, version: number): Pro
   };
 }
 
+/** Only the stored model of a revision (the save's change summary needs nothing else). */
+export async function findRevisionModel(db: Db, beamId: string, version: number): Promise<Record<string, unknown> | null> {
+  const [row] = await db
+    .select({ model: beamRevisions.model })
+    .from(beamRevisions)
+    .where(and(eq(beamRevisions.beamId, beamId), eq(beamRevisions.version, version)));
+  return (row?.model as Record<string, unknown> | undefined) ?? null;
+}
+
+/** The name a revision shows for its author. */
+export async function findAuthorName(db: Db, userId: string): Promise<string | null> {
+  const [row] = await db.select({ name: users.name }).from(users).where(eq(users.id, userId));
+  return row?.name ?? null;
+}
+
 /** Writes a revision and its result; the caller runs this inside the transaction that bumped the version. */
 export async function insertRevisionWithResult(
   db: Db,

@@ -11,6 +11,12 @@ import { summariseRevisionChange } from "./changeSummary.js";
 import { asBeamModel, findProjectInfo } from "./revisionContext.js";
 import * as repo from "./revisions.repo.js";
 
+/** A promise whose rejection is handled now and rethrown where it is awaited (outcomes taken in order). */
+function quietly<T>(promise: Promise<T>): Promise<T> {
+  promise.catch(() => undefined);
+  return promise;
+}
+
 export function createRevisionsService(deps: { db: Db; clock: Clock; engine: Engine; beams: BeamsService }) {
   const { db, clock, engine, beams } = deps;
 
@@ -41,20 +47,27 @@ export function createRevisionsService(deps: { db: Db; clock: Clock; engine: Eng
      * stored with the revision in the same transaction.
      */
     async save(actorId: string, projectId: string, beamId: string, input: Required<SaveRevisionRequest>): Promise<Revision> {
-      await authorize(db, projectId, actorId, "edit");
-      await beams.requireBeam(db, projectId, beamId);
-      const result = await runSolver(engine, input.model);
-      const now = clock.now();
-      const version = input.baseVersion + 1;
-      // the diff is against the edited revision; if it is not the latest, the save below conflicts
-      const base = await repo.findRevision(db, beamId, input.baseVersion);
-      const project = await findProjectInfo(db, projectId);
+      // The solve and the reads run at once, but their outcomes are taken in the order the rules
+      // give them: access first (404/403), then the beam, then the model (422). Nothing is written
+      // before all of them have succeeded.
+      const solving = quietly(runSolver(engine, input.model));
+      const access = quietly(authorize(db, projectId, actorId, "edit"));
+      const beam = quietly(beams.requireBeam(db, projectId, beamId));
+      const base = quietly(repo.findRevisionModel(db, beamId, input.baseVersion));
+      const project = quietly(findProjectInfo(db, projectId));
+      const author = quietly(repo.findAuthorName(db, actorId));
+      await access;
+      await beam;
+      const result = await solving;
+      const baseModel = await base;
       const changeSummary = summariseRevisionChange(
-        base ? asBeamModel(base.model) : null,
+        baseModel ? asBeamModel(baseModel) : null,
         asBeamModel(input.model),
-        project?.unitSystem ?? "si",
+        (await project)?.unitSystem ?? "si",
         input.changeSummary,
       );
+      const now = clock.now();
+      const version = input.baseVersion + 1;
       const saved = await inTransaction(db, async (tx) => {
         if (!(await advanceVersion(tx, beamId, input.baseVersion, now))) return false;
         await repo.insertRevisionWithResult(tx, {
@@ -70,15 +83,27 @@ export function createRevisionsService(deps: { db: Db; clock: Clock; engine: Eng
         return true;
       });
       if (!saved) {
-        const beam = await beams.requireBeam(db, projectId, beamId);
-        const current = toPublic(await requireRevision(db, beamId, beam.latestVersion));
+        const latest = await beams.requireBeam(db, projectId, beamId);
+        const current = toPublic(await requireRevision(db, beamId, latest.latestVersion));
         throw new AppError(
           "version-conflict",
-          `revision ${beam.latestVersion} was saved since you opened revision ${input.baseVersion}`,
+          `revision ${latest.latestVersion} was saved since you opened revision ${input.baseVersion}`,
           { baseVersion: input.baseVersion, current },
         );
       }
-      return toPublic(await requireRevision(db, beamId, version));
+      // what was just written, as a read would give it: no second round trip for a large result
+      return {
+        version,
+        author: { id: actorId, name: (await author) ?? "" },
+        createdAt: now.toISOString(),
+        changeSummary,
+        status: "draft",
+        checkedBy: null,
+        checkedAt: null,
+        checkComment: null,
+        model: input.model,
+        result,
+      };
     },
 
     /** Marks a draft checked (checkers only). A checked revision never changes again. */

@@ -31,6 +31,8 @@ describe("revisions", () => {
     });
     // twice the load, twice the reaction (linear elastic)
     expect(res.body.revision.result.results.D.reactions[0].fy).toBeCloseTo(37_500, 6);
+    // the save's answer is built from what was written: a read of the revision gives the same
+    expect((await owner.client.get(`${base}/2`)).body.revision).toEqual(res.body.revision);
     const first = (await owner.client.get(`${base}/1`)).body.revision;
     expect(first.result.results.D.reactions[0].fy).toBeCloseTo(18_750, 6);
     expect((await owner.client.get(beamPath)).body.beam.latestVersion).toBe(2);
@@ -58,6 +60,18 @@ describe("revisions", () => {
     const statuses = results.map((r) => r.status).sort();
     expect(statuses).toEqual([201, 409, 409, 409]);
     expect((await owner.client.get(base)).body.revisions).toHaveLength(2);
+  });
+
+  it("answers a viewer's save with 403 and an unknown beam with 404 before looking at the model", async () => {
+    const { owner, base, beamPath } = await beamWithTeam();
+    const viewer = await t.signUp("Viewer");
+    const projectPath = beamPath.split("/beams/")[0]!;
+    await owner.client.post(`${projectPath}/members`, { email: viewer.email, role: "viewer" });
+    const byViewer = await viewer.client.post(base, { baseVersion: 1, model: invalidModel() });
+    expect(byViewer.status).toBe(403);
+    const unknownBeam = await owner.client.post(`${projectPath}/beams/00000000-0000-4000-8000-000000000000/revisions`, { baseVersion: 1, model: invalidModel() });
+    expect(unknownBeam.status).toBe(404);
+    expect((await owner.client.get(beamPath)).body.beam.latestVersion).toBe(1);
   });
 
   it("answers 422 for an invalid model and keeps the version where it was", async () => {
