@@ -3,6 +3,7 @@ import { fireEvent, render, screen, within } from "@testing-library/react";
 import { MATERIAL_PRESETS, propertiesOfValidShape, type IShape } from "@spanwright/solver/design";
 import { solve } from "@spanwright/solver";
 import { ChecksPanel } from "./ChecksPanel";
+import { defaultChoices, type CheckChoices } from "./checkChoices";
 import { stationsForChecks } from "./computeBeamChecks";
 import type { DesignModel } from "./designModel";
 
@@ -101,5 +102,18 @@ describe("ChecksPanel", () => {
     const result = solve({ ...model, stations: stationsForChecks(model, null) });
     render(<ChecksPanel model={model} result={result} units="si" shape={shape} material={steel} />);
     expect(within(screen.getByRole("table", { name: "Member checks" })).getByText("162 kN·m")).toBeTruthy();
+  });
+
+  it("starts from the choices given, takes Cb = 1.0 when chosen, and reports each change in SI", () => {
+    const seen: CheckChoices[] = [];
+    const initial = { ...defaultChoices(model), method: "ASD" as const, lb: 3 };
+    render(<ChecksPanel model={model} units="si" shape={shape} material={steel} solveModel={solve} initial={initial} onChoicesChange={(c) => seen.push(c)} />);
+    expect((screen.getByLabelText("Design method") as HTMLSelectElement).value).toBe("ASD");
+    expect((screen.getByLabelText("Unbraced length Lb (m)") as HTMLInputElement).value).toBe("3");
+    fireEvent.change(screen.getByLabelText("Cb (lateral-torsional buckling)"), { target: { value: "unity" } });
+    expect(seen.at(-1)).toMatchObject({ method: "ASD", lb: 3, cb: "unity" });
+    // Cb taken as 1.0 (AISC 360-22 §F1) is shown beside the F2 inputs of every flexure row
+    const flexure = within(screen.getByRole("table", { name: "Member checks" })).getAllByText(/flexure/i);
+    expect(flexure).toHaveLength(2);
   });
 });

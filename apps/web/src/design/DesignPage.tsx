@@ -2,26 +2,29 @@ import { useMemo, useState } from "react";
 import { Link, useParams } from "react-router";
 import { beamModelSchema, solve, type BeamModel } from "@spanwright/solver";
 import {
-  findMaterialPreset,
-  MATERIAL_PRESETS,
   sectionProperties,
   type GeneratedCombination,
   type Material,
   type ResultLike,
   type SectionShape,
 } from "@spanwright/solver/design";
+import type { BeamDesignSettings, ProjectSection } from "@spanwright/contracts";
 import { useBeam } from "../api/beams";
 import { useProject } from "../api/projects";
+import { useSections } from "../api/sections";
 import { Alert } from "../components/Alert";
 import { Card, PageHeader } from "../components/PageHeader";
 import { Loading, QueryError } from "../components/QueryState";
 import type { UnitSystemId } from "../editor/units/unitSystems";
+import { choicesFromSettings, settingsOf, type CheckChoices } from "./checkChoices";
 import { ChecksPanel } from "./ChecksPanel";
 import { CombinationGenerator } from "./CombinationGenerator";
+import { DesignSettingsBar } from "./DesignSettingsBar";
+import { reportPdfUrl, useSaveDesignSettings } from "./designSettingsApi";
 import { MaterialPicker } from "./MaterialPicker";
 import { SectionAtX } from "./SectionAtX";
 import { SectionEditor } from "./SectionEditor";
-import { DEFAULT_SHAPES } from "./shapeFields";
+import { materialToSave, sectionChoiceOf, SectionSourcePicker, startingSection, type SectionSource } from "./SectionSourcePicker";
 import { TheoryPanel } from "./TheoryPanel";
 
 function isResultLike(value: unknown): value is ResultLike {
@@ -30,24 +33,37 @@ function isResultLike(value: unknown): value is ResultLike {
 
 /**
  * Route /projects/:projectId/beams/:beamId/design: the saved beam's latest revision with the
- * section, material, combinations and checks chosen here. Nothing on this page is saved yet.
+ * section, material and check choices saved with the beam (engineers and owners save them; others
+ * read them), the combinations generated here (kept on this page only) and the checks.
  */
 export function DesignPage() {
   const { projectId = "", beamId = "" } = useParams();
   const beam = useBeam(projectId, beamId);
   const project = useProject(projectId);
-  if (beam.isPending || project.isPending) return <Loading label="Opening beam…" />;
+  const sections = useSections(projectId);
+  if (beam.isPending || project.isPending || sections.isPending) return <Loading label="Opening beam…" />;
   if (beam.isError) return <QueryError error={beam.error} title="Could not load the beam" onRetry={() => void beam.refetch()} />;
   const parsed = beamModelSchema.safeParse(beam.data.revision.model);
   const units: UnitSystemId = project.data?.unitSystem ?? "si";
+  const role = project.data?.role;
+  const version = beam.data.revision.version;
   return (
     <div className="space-y-6">
       <Link to={`/projects/${projectId}/beams/${beamId}`} className="text-sm text-paper-600 hover:underline">
         ← Back to the beam
       </Link>
-      <PageHeader title={`Design checks: ${beam.data.beam.name}`} eyebrow={`Revision ${beam.data.revision.version}`} />
+      <PageHeader title={`Design checks: ${beam.data.beam.name}`} eyebrow={`Revision ${version}`} />
       {parsed.success ? (
-        <DesignWorkspace key={`${beamId}/${beam.data.revision.version}`} model={parsed.data} result={isResultLike(beam.data.revision.result) ? beam.data.revision.result : null} units={units} />
+        <DesignWorkspace
+          key={`${beamId}/${version}`}
+          ids={{ projectId, beamId, version }}
+          model={parsed.data}
+          result={isResultLike(beam.data.revision.result) ? beam.data.revision.result : null}
+          units={units}
+          saved={beam.data.designSettings ?? null}
+          sections={sections.data ?? []}
+          canEdit={role === "owner" || role === "engineer"}
+        />
       ) : (
         <Alert tone="error" title="The saved model cannot be read">{parsed.error.issues[0]?.message ?? "invalid model"}</Alert>
       )}
@@ -55,10 +71,25 @@ export function DesignPage() {
   );
 }
 
-function DesignWorkspace({ model, result, units }: { model: BeamModel; result: ResultLike | null; units: UnitSystemId }) {
-  const [shape, setShape] = useState<SectionShape>(DEFAULT_SHAPES["i-shape"]);
-  const [material, setMaterial] = useState<Material>(findMaterialPreset("steel-a992") ?? MATERIAL_PRESETS[0]!);
+interface DesignWorkspaceProps {
+  readonly ids: { readonly projectId: string; readonly beamId: string; readonly version: number };
+  readonly model: BeamModel;
+  readonly result: ResultLike | null;
+  readonly units: UnitSystemId;
+  readonly saved: BeamDesignSettings | null;
+  readonly sections: readonly ProjectSection[];
+  readonly canEdit: boolean;
+}
+
+function DesignWorkspace({ ids, model, result, units, saved, sections, canEdit }: DesignWorkspaceProps) {
+  const [start] = useState(() => startingSection(saved, sections));
+  const [source, setSource] = useState<SectionSource>(start.source);
+  const [shape, setShape] = useState<SectionShape>(start.shape);
+  const [material, setMaterial] = useState<Material>(start.material);
+  const [pickerKey, setPickerKey] = useState(0);
   const [added, setAdded] = useState<readonly GeneratedCombination[]>([]);
+  const [choices, setChoices] = useState<CheckChoices>(() => choicesFromSettings(saved, model));
+  const save = useSaveDesignSettings(ids.projectId, ids.beamId);
   const theory = model.theory ?? "euler-bernoulli";
 
   // Generated combinations join the saved ones on this page only; the editor's table keeps the beam's own.
@@ -70,14 +101,33 @@ function DesignWorkspace({ model, result, units }: { model: BeamModel; result: R
   const cases = useMemo(() => model.loadCases.map((c) => ({ id: c.id, category: c.category })), [model]);
   const takenIds = useMemo(() => (model.combinations ?? []).map((c) => c.id), [model]);
 
+  const pickSource = (next: SectionSource) => {
+    setSource(next);
+    const section = next.kind === "project" ? sections.find((s) => s.id === next.sectionId) : undefined;
+    if (section) {
+      setShape(section.shape as SectionShape);
+      setMaterial(section.material as Material);
+      setPickerKey((k) => k + 1);
+    }
+  };
+  const editShape = (next: SectionShape) => {
+    setShape(next);
+    // Editing a project section's dimensions checks a new shape typed here; the library entry stays as it is.
+    if (source.kind === "project") setSource({ kind: "typed", name: `${sections.find((s) => s.id === source.sectionId)?.name ?? "Section"} (edited)` });
+  };
+  const draft = settingsOf(sectionChoiceOf(source, shape), materialToSave(source, material, sections), choices, designModel);
+
   return (
     <div className="space-y-6">
-      <Card title="Section and material">
-        <div className="space-y-6">
-          <MaterialPicker units={units} initial={material} onChange={setMaterial} />
-          <SectionEditor units={units} initialShape={shape} material={material} theory={theory} onChange={(c) => setShape(c.shape)} />
-        </div>
-      </Card>
+      <fieldset disabled={!canEdit} className="min-w-0">
+        <Card title="Section and material">
+          <div className="space-y-6">
+            <SectionSourcePicker source={source} sections={sections} onChange={pickSource} />
+            <MaterialPicker key={`m${pickerKey}`} units={units} initial={material} onChange={setMaterial} />
+            <SectionEditor key={`s${pickerKey}`} units={units} initialShape={shape} material={material} theory={theory} onChange={(c) => editShape(c.shape)} />
+          </div>
+        </Card>
+      </fieldset>
       <Card title="Load combinations from a code preset">
         <CombinationGenerator cases={cases} takenIds={takenIds} onApply={setAdded} />
         {added.length > 0 && (
@@ -87,7 +137,29 @@ function DesignWorkspace({ model, result, units }: { model: BeamModel; result: R
         )}
       </Card>
       <Card title="Member checks">
-        <ChecksPanel key={added.map((c) => c.id).join(",")} model={designModel} result={added.length > 0 ? null : result} units={units} shape={shape} material={material} solveModel={solve} />
+        <ChecksPanel
+          key={added.map((c) => c.id).join(",")}
+          model={designModel}
+          result={added.length > 0 ? null : result}
+          units={units}
+          shape={shape}
+          material={material}
+          solveModel={solve}
+          initial={choices}
+          onChoicesChange={setChoices}
+          readOnly={!canEdit}
+          footer={
+            <DesignSettingsBar
+              draft={draft}
+              saved={saved}
+              canEdit={canEdit}
+              saving={save.isPending}
+              error={save.error}
+              onSave={(settings) => save.mutate(settings)}
+              reportHref={reportPdfUrl(ids.projectId, ids.beamId, ids.version)}
+            />
+          }
+        />
       </Card>
       <Card title="Section at x">
         <SectionAtX model={designModel} shape={shape} material={material} units={units} />
