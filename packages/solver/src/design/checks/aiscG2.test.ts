@@ -23,6 +23,16 @@ describe("AISC 360-22 §G2.1 shear of I-shape webs", () => {
     expect((s.phi * s.Vn) / KIP).toBeCloseTo(251.7, 1);
   });
 
+  it("the recalled h/tw of W18x50 and W24x55 follow from h = d − 2·k_des (Table 1-1 dimensions, from memory)", () => {
+    // W18x50: d = 18.0 in, tw = 0.355 in, k_des = 0.972 in; W24x55: d = 23.6 in, tw = 0.395 in, k_des = 1.01 in.
+    // For rolled shapes the tables take h as the clear distance between the fillets (AISC 360-22 §B4.1b).
+    expect((18.0 - 2 * 0.972) / 0.355).toBeCloseTo(45.2, 1);
+    expect((23.6 - 2 * 1.01) / 0.395).toBeCloseTo(54.6, 1);
+    // and the limits quoted: 2.24√(E/Fy) = 53.9, 1.10√(kv·E/Fy) with kv = 5.34 = 61.2 (Fy = 50 ksi)
+    expect(2.24 * Math.sqrt(29_000 / 50)).toBeCloseTo(53.9, 1);
+    expect(1.1 * Math.sqrt((5.34 * 29_000) / 50)).toBeCloseTo(61.2, 1);
+  });
+
   it("slender built-up web, hand calculation: h/tw = 120 > 1.10√(5.34·E/Fy) = 61.2 → Cv1 = 0.510 (eq. G2-4)", () => {
     // d = 1000 mm, tw = 8 mm, h = 960 mm, Fy = 345 MPa, E = 200 GPa:
     // 1.10 × √(5.34 × 200000/345) = 1.10 × 55.64 = 61.20; Cv1 = 61.20/120 = 0.5100;

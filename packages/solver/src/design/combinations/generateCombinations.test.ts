@@ -89,6 +89,24 @@ describe("ASCE/SEI 7-22 §2.4.1 allowable stress combinations", () => {
   });
 });
 
+describe("the recalled ASCE/SEI 7-22 snow factors hang together", () => {
+  // 7-22 gives S at strength level. Its ASD combinations take 0.7S, so a service-level snow load is
+  // about 0.7 of the strength-level one; the 7-16 companion factors on service-level snow, 0.5 with
+  // dead + live and 0.2 with earthquake (ASCE/SEI 7-16 §2.3.1 and §2.3.6, from memory), times 0.7
+  // should land near the recalled 7-22 factors 0.3 and 0.15. A check on the recollection, not a source.
+  const factorOn = (preset: "asce7-22-strength" | "asce7-22-allowable", number: string, cases: LoadCaseRef[]) =>
+    generateCombinations(preset, cases).combinations.find((c) => c.source.endsWith(` ${number}`))?.factors.S;
+
+  it("ASD leads with 0.7S; LRFD companions 0.3S (≈ 0.5 × 0.7) and 0.15S with earthquake (≈ 0.2 × 0.7)", () => {
+    const service = factorOn("asce7-22-allowable", "3", [D, S]);
+    expect(service).toBe(0.7);
+    expect(Math.abs(factorOn("asce7-22-strength", "2", [D, L, S])! - 0.5 * service!)).toBeLessThanOrEqual(0.05);
+    expect(Math.abs(factorOn("asce7-22-strength", "6", [D, L, S, E])! - 0.2 * service!)).toBeLessThan(0.011);
+    // ASD 4: 0.75 × 0.7S = 0.525S, the same conversion inside the 0.75 companion factor
+    expect(factorOn("asce7-22-allowable", "4", [D, L, S])).toBeCloseTo(0.75 * service!, 12);
+  });
+});
+
 describe("EN 1990:2002+A1 eq. 6.10 with Table A1.1 ψ0 and Table A1.2(B) γ", () => {
   it("live leading: 1.35G + 1.5Q; with snow and wind accompanying at 1.5ψ0 (0.5 and 0.6)", () => {
     const set = generateCombinations("en1990-6.10", [D, L, S, W1]);

@@ -27,4 +27,17 @@ describe("I-shape torsion and lateral-torsional buckling properties", () => {
     expect(p.Cw).toBeCloseTo((p.Iy * p.ho ** 2) / 4, 20);
     expect(p.rts ** 2).toBeCloseTo(Math.sqrt(p.Iy * p.Cw) / p.Sx, 12);
   });
+
+  it("the recalled W18x50 values agree among themselves: ry = √(Iy/A), ho = d − tf, Cw = Iy·ho²/4, rts² = √(Iy·Cw)/Sx", () => {
+    // Table 1-1 values (from memory): A = 14.7 in², Iy = 40.1 in⁴, Sx = 88.9 in³, d = 18.0 in, tf = 0.570 in,
+    // ry = 1.65 in, ho = 17.4 in, Cw = 3040 in⁶, rts = 1.98 in. The identities hold for doubly symmetric
+    // I-shapes (AISC 360-22 §F2, user note to eq. F2-7); agreement to the tables' three figures is what
+    // a correct recollection must show.
+    const [A, Iy, Sx, d, tf, ry, ho, Cw, rts] = [14.7, 40.1, 88.9, 18.0, 0.57, 1.65, 17.4, 3040, 1.98];
+    const close = (a: number, b: number, tol: number) => expect(Math.abs(a - b) / b).toBeLessThan(tol);
+    close(Math.sqrt(Iy / A), ry, 0.005);
+    close(d - tf, ho, 0.005);
+    close((Iy * ho ** 2) / 4, Cw, 0.005);
+    close(Math.sqrt(Math.sqrt(Iy * Cw) / Sx), rts, 0.005);
+  });
 });

@@ -123,6 +123,33 @@ describe("rolled W-shapes against AISC Steel Construction Manual, 16th ed., Tabl
   });
 });
 
+describe("the recalled W-shape table values agree with closed forms from their own dimensions", () => {
+  // Table 1-1 values as above (from memory), with k_des (from memory): W14x22 0.735 in, W18x50 0.972 in.
+  // Plates: A = 2·bf·tf + (d − 2tf)·tw, Ix = bf·d³/12 − (bf − tw)(d − 2tf)³/12 (closed form, fillets
+  // ignored). The four web-to-flange fillets of radius r = k_des − tf add (1 − π/4)·r² each to A, at
+  // d/2 − tf − 0.2234r from the axis (a spandrel's centroid lies (10 − 3π)r/(12 − 3π) from its straight
+  // edges, closed form; the fillet's own I is neglected), which closes the gap.
+  it.each([
+    // name, d, bf, tw, tf, k_des, A in², Ix in⁴, Sx in³
+    ["W14x22", 13.7, 5.0, 0.23, 0.335, 0.735, 6.49, 199, 29.0],
+    ["W18x50", 18.0, 7.5, 0.355, 0.57, 0.972, 14.7, 800, 88.9],
+  ] as const)("%s: plates plus fillets give the tabulated A and Ix within 1 %, and Sx = Ix/(d/2)", (_n, d, bf, tw, tf, kdes, A, Ix, Sx) => {
+    const r = kdes - tf;
+    const fillets = 4 * (1 - Math.PI / 4) * r * r;
+    const arm = d / 2 - tf - 0.2234 * r;
+    const plateA = 2 * bf * tf + (d - 2 * tf) * tw;
+    const plateIx = (bf * d ** 3) / 12 - ((bf - tw) * (d - 2 * tf) ** 3) / 12;
+    // the engine's plate values are these closed forms
+    const p = props({ kind: "i-shape", d: d * INCH, bf: bf * INCH, tw: tw * INCH, tf: tf * INCH });
+    expect(rel(p.A / INCH ** 2, plateA)).toBeLessThan(1e-12);
+    expect(rel(p.I / INCH ** 4, plateIx)).toBeLessThan(1e-12);
+    expect(rel(plateA + fillets, A)).toBeLessThan(0.01);
+    expect(rel(plateIx + fillets * arm * arm, Ix)).toBeLessThan(0.01);
+    // the recalled Sx and Ix agree with each other to the table's rounding
+    expect(rel(Ix / (d / 2), Sx)).toBeLessThan(0.005);
+  });
+});
+
 describe("custom sections", () => {
   it("derive Stop and Sbot from the typed centroid and leave unknowns null", () => {
     const p = props({ kind: "custom", A: 0.01, I: 2e-4, depth: 0.5, yTop: 0.2 });
