@@ -1,6 +1,7 @@
 import { eq } from "drizzle-orm";
 import type { Beam, Permission, ProjectUnits, Revision, UnitSystem } from "@spanwright/contracts";
 import { displayUnit, type BeamModel, type SolveResult } from "@spanwright/handoff";
+import { validateModel } from "@spanwright/solver";
 import { authorize } from "../access/access.js";
 import { findBeam } from "../beams/beams.repo.js";
 import type { Db } from "../db/client.js";
@@ -45,7 +46,16 @@ export function projectUnits(system: UnitSystem): ProjectUnits {
   };
 }
 
-export const asBeamModel = (json: Record<string, unknown>): BeamModel => json as unknown as BeamModel;
+/**
+ * A stored model with the exchange format's defaults filled in (no combinations, no stations, …),
+ * as the solver read it: stored models are the JSON as saved, where optional parts may be absent.
+ */
+export function asBeamModel(json: Record<string, unknown>): BeamModel {
+  const parsed = validateModel(json);
+  // every stored model passed the solver on save; a failure here is a corrupted row
+  if (!parsed.ok) throw new Error(`stored model is not valid: ${parsed.error.where} ${parsed.error.message}`);
+  return parsed.value;
+}
 export const asSolveResult = (json: Record<string, unknown>): SolveResult => json as unknown as SolveResult;
 
 /** Authorises the caller, then loads project, beam and revision; anything missing is 404. */
