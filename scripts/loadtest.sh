@@ -26,6 +26,9 @@ if [ ! -f apps/web/dist/index.html ]; then
   pnpm --filter @spanwright/web build >/dev/null
 fi
 
+# the production server bundle (apps/api/build.mjs), as `npm start` runs it
+pnpm --filter @spanwright/api build >/dev/null
+
 bash scripts/db.sh createdb "$DB_NAME" >/dev/null
 DATABASE_URL=$(bash scripts/db.sh url "$DB_NAME")
 export DATABASE_URL
@@ -33,7 +36,7 @@ pnpm --silent --filter @spanwright/api run migrate
 
 PORT=$(node -e 'const s=require("net").createServer().listen(0,"127.0.0.1",()=>{console.log(s.address().port);s.close()})')
 # a production server; the sign-in rate limit is raised only so the script's own sign-up is never refused
-(cd apps/api && NODE_ENV=production HOST=127.0.0.1 PORT="$PORT" AUTH_RATE_LIMIT=1000 exec node --import tsx src/main.ts) >"$LOG" 2>&1 &
+(cd apps/api && NODE_ENV=production HOST=127.0.0.1 PORT="$PORT" AUTH_RATE_LIMIT=1000 exec node dist/main.mjs) >"$LOG" 2>&1 &
 server_pid=$!
 
 for _ in $(seq 1 120); do

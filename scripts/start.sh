@@ -26,6 +26,7 @@ cleanup() {
 trap cleanup INT TERM EXIT
 
 pnpm --filter @spanwright/web build >/dev/null
+pnpm --filter @spanwright/api build >/dev/null
 pnpm --silent --filter @spanwright/api run migrate
 pnpm --silent --filter @spanwright/api run seed
 
@@ -37,6 +38,6 @@ echo "Spanwright: http://$HOST:$PORT"
 echo "Demo sign-in: demo@spanwright.test / spanwright-demo   (Ctrl-C stops)"
 echo
 # node itself (not pnpm) is the child, so the trap's kill reaches the server and it shuts down cleanly
-(cd apps/api && exec node --import tsx src/main.ts) &
+(cd apps/api && exec node --enable-source-maps dist/main.mjs) &
 api_pid=$!
 wait "$api_pid"
