@@ -28,7 +28,19 @@ if (config.mail.mode === "catcher") {
   logger.warn("SMTP_HOST is not set: hand-offs will fail until it is");
 }
 const solverPool = createSolverPool({ timeoutMs: config.solver.timeoutMs, ...(config.solver.threads ? { threads: config.solver.threads } : {}) });
-const { app } = createApp({ config, database, engine: solverPool, logger, mailer });
+const { app, services } = createApp({ config, database, engine: solverPool, logger, mailer });
+
+const SWEEP_EVERY_MS = 60 * 60 * 1000;
+async function sweepSessions(): Promise<void> {
+  try {
+    const deleted = await services.auth.sweepExpiredSessions();
+    if (deleted > 0) logger.info({ deleted }, "expired sessions deleted");
+  } catch (error) {
+    logger.warn({ err: error }, "sweeping expired sessions failed; will try again");
+  }
+}
+void sweepSessions();
+setInterval(() => void sweepSessions(), SWEEP_EVERY_MS).unref();
 
 const server = app.listen(config.port, config.host, () => {
   logger.info(`Spanwright is listening on http://${config.host}:${config.port}`);

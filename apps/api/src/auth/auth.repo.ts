@@ -1,4 +1,4 @@
-import { and, eq, isNull, ne, sql } from "drizzle-orm";
+import { and, eq, isNull, lt, ne, sql } from "drizzle-orm";
 import type { Db } from "../db/client.js";
 import { preparedQuery } from "../db/preparedQuery.js";
 import { sessions, users } from "../db/schema.js";
@@ -87,6 +87,12 @@ export async function updateSessionExpiry(db: Db, sessionId: string, expiresAt: 
 
 export async function deleteSession(db: Db, sessionId: string): Promise<void> {
   await db.delete(sessions).where(eq(sessions.id, sessionId));
+}
+
+/** Deletes every session that expired before `now`; returns how many. */
+export async function deleteExpiredSessions(db: Db, now: Date): Promise<number> {
+  const rows = await db.delete(sessions).where(lt(sessions.expiresAt, now)).returning({ id: sessions.id });
+  return rows.length;
 }
 
 export async function deleteOtherSessions(db: Db, userId: string, keepSessionId: string): Promise<void> {

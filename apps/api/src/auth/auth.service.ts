@@ -38,6 +38,15 @@ export function createAuthService(deps: { db: Db; clock: Clock }) {
   return {
     issueSession,
 
+    /**
+     * Deletes the sessions that expired: an expired session is refused and deleted when it is
+     * presented, but one that never comes back would otherwise stay forever. The server runs this at
+     * start and every hour.
+     */
+    sweepExpiredSessions(): Promise<number> {
+      return repo.deleteExpiredSessions(db, clock.now());
+    },
+
     /** Creates the account, or completes a placeholder an invitation created for this e-mail. */
     async signUp(input: SignUpRequest): Promise<{ user: User; session: IssuedSession }> {
       const passwordHash = await hashPassword(input.password);

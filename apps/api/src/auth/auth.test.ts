@@ -108,6 +108,25 @@ describe("session lifetime", () => {
     expect((await client.get("/api/me")).status).toBe(401);
   });
 
+  it("sweeps sessions that expired and were never presented again, keeping live ones", async () => {
+    const { sessions } = await import("../db/schema.js");
+    const countSessions = async () => (await t.database.db.select({ id: sessions.id }).from(sessions)).length;
+    await t.signUp("Gone Away");
+    const before = await countSessions();
+    t.clock.advance(sessionLifetimeMs + 1000);
+    let swept: number;
+    try {
+      const { client } = await t.signUp("Still Here");
+      swept = await t.services.auth.sweepExpiredSessions();
+      expect((await client.get("/api/me")).status).toBe(200);
+    } finally {
+      t.clock.advance(-(sessionLifetimeMs + 1000));
+    }
+    // every session made before the jump expired (this file's earlier ones too); the new one stays
+    expect(swept).toBe(before);
+    expect(await countSessions()).toBe(1);
+  });
+
   it("slides the expiry forward when less than half the lifetime is left", async () => {
     const { client } = await t.signUp("Regular");
     const shift = sessionLifetimeMs - sessionRenewWithinMs + 60_000;
