@@ -1,3 +1,5 @@
+// First, before React evaluates: starts the first screen's requests, chunk and engine worker.
+import "./boot";
 import { StrictMode } from "react";
 import { createRoot } from "react-dom/client";
 // IBM Plex Sans ships inside the bundle; the app never fetches fonts or scripts from elsewhere.

@@ -1,18 +1,14 @@
 import { useMutation, useQuery, useQueryClient, type QueryClient } from "@tanstack/react-query";
-import {
-  meResponseSchema,
-  routePath,
-  type SignInRequest,
-  type SignUpRequest,
-  type User,
-} from "@spanwright/contracts";
+import type { SignInRequest, SignUpRequest, User } from "@spanwright/contracts";
+import { routePath } from "@spanwright/contracts/routes";
 import { isApiError, request } from "./client";
+import { parseWith } from "./schemas";
 import { queryKeys } from "./queryKeys";
 
 /** The signed-in user, or null when there is no session (401 is an answer here, not an error). */
 export async function fetchMe(signal?: AbortSignal): Promise<User | null> {
   try {
-    const body = await request(routePath("me"), { signal, parse: (d) => meResponseSchema.parse(d) });
+    const body = await request(routePath("me"), { signal, parse: parseWith("meResponseSchema") });
     return body.user;
   } catch (error) {
     if (isApiError(error) && error.status === 401) return null;
@@ -46,7 +42,7 @@ function useSessionStart<Input>(route: "signIn" | "signUp") {
       request(routePath(route), {
         method: "POST",
         body: input,
-        parse: (d) => meResponseSchema.parse(d),
+        parse: parseWith("meResponseSchema"),
       }),
     onSuccess: (body) => {
       // A different user may sign in on the same tab: drop everything cached for the last one.

@@ -1,12 +1,8 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import {
-  beamListResponseSchema,
-  beamResponseSchema,
-  routePath,
-  type BeamResponse,
-  type CreateBeamRequest,
-} from "@spanwright/contracts";
+import type { BeamResponse, CreateBeamRequest } from "@spanwright/contracts";
+import { routePath } from "@spanwright/contracts/routes";
 import { request } from "./client";
+import { parseWith } from "./schemas";
 import { queryKeys } from "./queryKeys";
 
 export function useBeams(projectId: string) {
@@ -15,7 +11,7 @@ export function useBeams(projectId: string) {
     queryFn: async ({ signal }) => {
       const body = await request(routePath("listBeams", { projectId }), {
         signal,
-        parse: (d) => beamListResponseSchema.parse(d),
+        parse: parseWith("beamListResponseSchema"),
       });
       return body.beams;
     },
@@ -29,7 +25,7 @@ export function beamQueryOptions(projectId: string, beamId: string) {
     queryFn: ({ signal }) =>
       request(routePath("getBeam", { projectId, beamId }), {
         signal,
-        parse: (d) => beamResponseSchema.parse(d),
+        parse: parseWith("beamResponseSchema"),
       }),
   });
 }
@@ -46,7 +42,7 @@ export function useCreateBeam(projectId: string) {
       request(routePath("createBeam", { projectId }), {
         method: "POST",
         body: input,
-        parse: (d) => beamResponseSchema.parse(d),
+        parse: parseWith("beamResponseSchema"),
       }),
     onSuccess: (created) => {
       queryClient.setQueryData(queryKeys.beam(projectId, created.beam.id), created);

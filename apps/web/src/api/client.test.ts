@@ -1,5 +1,5 @@
-import { describe, expect, it, vi } from "vitest";
-import { ApiError, extractFieldErrors, parseErrorBody, request } from "./client";
+import { afterEach, describe, expect, it, vi } from "vitest";
+import { ApiError, extractFieldErrors, parseErrorBody, request, requestEarly } from "./client";
 
 function jsonResponse(status: number, body: unknown): Response {
   return new Response(body === undefined ? null : JSON.stringify(body), {
@@ -106,5 +106,48 @@ describe("request", () => {
       code: "invalid-response",
       details: "no user",
     });
+  });
+});
+
+describe("requestEarly", () => {
+  afterEach(() => {
+    vi.unstubAllGlobals();
+    vi.useRealTimers();
+  });
+
+  function stubFetch(answers: Array<{ status: number; body: unknown }>): string[] {
+    const urls: string[] = [];
+    vi.stubGlobal("fetch", async (input: string) => {
+      urls.push(input);
+      const answer = answers.shift() ?? { status: 500, body: null };
+      return jsonResponse(answer.status, answer.body);
+    });
+    return urls;
+  }
+
+  it("hands its answer to the first request of the path, parsed, and asks again after that", async () => {
+    const urls = stubFetch([{ status: 200, body: { n: 1 } }, { status: 200, body: { n: 2 } }]);
+    requestEarly("/api/early-1");
+    expect(urls).toEqual(["/api/early-1"]);
+    await expect(request("/api/early-1", { parse: (d) => (d as { n: number }).n })).resolves.toBe(1);
+    expect(urls).toHaveLength(1);
+    await expect(request("/api/early-1")).resolves.toEqual({ n: 2 });
+    expect(urls).toHaveLength(2);
+  });
+
+  it("hands on the server's error as the ApiError request() would give", async () => {
+    stubFetch([{ status: 401, body: { error: { code: "unauthenticated", message: "Sign in first." } } }]);
+    requestEarly("/api/early-2");
+    await expect(request("/api/early-2")).rejects.toMatchObject({ code: "unauthenticated", status: 401 });
+  });
+
+  it("is not used for other methods, nor once it is older than a few seconds", async () => {
+    vi.useFakeTimers({ toFake: ["Date"] });
+    const urls = stubFetch([{ status: 200, body: { n: 1 } }, { status: 201, body: { n: 2 } }, { status: 200, body: { n: 3 } }]);
+    requestEarly("/api/early-3");
+    await expect(request("/api/early-3", { method: "POST", body: {} })).resolves.toEqual({ n: 2 });
+    vi.setSystemTime(Date.now() + 60_000);
+    await expect(request("/api/early-3")).resolves.toEqual({ n: 3 });
+    expect(urls).toHaveLength(3);
   });
 });

@@ -109,7 +109,10 @@ export interface RequestOptions {
   method?: RequestMethod;
   body?: unknown;
   signal?: AbortSignal;
-  /** Validates and narrows the JSON body; a mismatch becomes an "invalid-response" ApiError. */
+  /**
+   * Validates and narrows the JSON body; a mismatch becomes an "invalid-response" ApiError. May be
+   * async (the contracts' schemas load as their own chunk: see schemas.ts).
+   */
   parse?: (data: unknown) => unknown;
 }
 
@@ -128,7 +131,7 @@ async function readJson(response: Response): Promise<unknown> {
 /** Sends one request; resolves with the parsed JSON (null for 204), rejects with ApiError. */
 export async function request<T>(
   path: string,
-  options: RequestOptions & { parse: (data: unknown) => T },
+  options: RequestOptions & { parse: (data: unknown) => T | PromiseLike<T> },
   fetchImpl?: Fetch,
 ): Promise<T>;
 export async function request(path: string, options?: RequestOptions, fetchImpl?: Fetch): Promise<unknown>;
@@ -137,6 +140,50 @@ export async function request(
   options: RequestOptions = {},
   fetchImpl: Fetch = (input, init) => fetch(input, init),
 ): Promise<unknown> {
+  const early = (options.method ?? "GET") === "GET" ? takeEarly(path) : null;
+  const { status, data } = await (early ?? send(path, options, fetchImpl));
+  if (options.parse === undefined) return data;
+  try {
+    return await options.parse(data);
+  } catch (cause) {
+    throw new ApiError({
+      code: "invalid-response",
+      status,
+      message: "The server sent a response this version of the app does not understand.",
+      details: cause instanceof Error ? cause.message : null,
+    });
+  }
+}
+
+/**
+ * GETs started by startEarly.ts before the app itself has loaded: the first request() for the same
+ * path takes the answer instead of asking again. Only for a few seconds, so that a page opened
+ * later never gets an old answer.
+ */
+const early = new Map<string, { at: number; answer: Promise<Answer> }>();
+const EARLY_TTL_MS = 10_000;
+
+/** Starts a GET of `path` now (JSON answer or ApiError), for the app's first request of it. */
+export function requestEarly(path: string): void {
+  const answer = send(path, {}, (input, init) => fetch(input, init));
+  answer.catch(() => {}); // the taker sees the error; nobody may have taken it
+  early.set(path, { at: Date.now(), answer });
+}
+
+function takeEarly(path: string): Promise<Answer> | null {
+  const started = early.get(path);
+  if (!started) return null;
+  early.delete(path);
+  return Date.now() - started.at <= EARLY_TTL_MS ? started.answer : null;
+}
+
+interface Answer {
+  readonly status: number;
+  readonly data: unknown;
+}
+
+/** One HTTP exchange: the status and JSON body (null for 204) of a 2xx answer, else an ApiError. */
+async function send(path: string, options: RequestOptions, fetchImpl: Fetch): Promise<Answer> {
   const headers: Record<string, string> = { Accept: "application/json" };
   const init: RequestInit = {
     method: options.method ?? "GET",
@@ -163,17 +210,7 @@ export async function request(
 
   const data = await readJson(response);
   if (!response.ok) throw parseErrorBody(response.status, data, response.statusText);
-  if (options.parse === undefined) return data;
-  try {
-    return options.parse(data);
-  } catch (cause) {
-    throw new ApiError({
-      code: "invalid-response",
-      status: response.status,
-      message: "The server sent a response this version of the app does not understand.",
-      details: cause instanceof Error ? cause.message : null,
-    });
-  }
+  return { status: response.status, data };
 }
 
 /** A short human sentence for any error a query or mutation can reject with. */

@@ -1,13 +1,8 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import {
-  handoffListResponseSchema,
-  handoffResponseSchema,
-  outboxResponseSchema,
-  routePath,
-  type CreateHandoffRequest,
-  type Handoff,
-} from "@spanwright/contracts";
+import type { CreateHandoffRequest, Handoff } from "@spanwright/contracts";
+import { routePath } from "@spanwright/contracts/routes";
 import { request } from "./client";
+import { parseWith } from "./schemas";
 import { queryKeys } from "./queryKeys";
 
 /** Every hand-off of the project, newest first, each with its `stale` flag. */
@@ -17,7 +12,7 @@ export function useProjectHandoffs(projectId: string) {
     queryFn: async ({ signal }) => {
       const body = await request(routePath("listProjectHandoffs", { projectId }), {
         signal,
-        parse: (d) => handoffListResponseSchema.parse(d),
+        parse: parseWith("handoffListResponseSchema"),
       });
       return body.handoffs;
     },
@@ -30,7 +25,7 @@ export function useBeamHandoffs(projectId: string, beamId: string) {
     queryFn: async ({ signal }) => {
       const body = await request(routePath("listBeamHandoffs", { projectId, beamId }), {
         signal,
-        parse: (d) => handoffListResponseSchema.parse(d),
+        parse: parseWith("handoffListResponseSchema"),
       });
       return body.handoffs;
     },
@@ -46,7 +41,7 @@ export function useCreateHandoff(projectId: string, beamId: string) {
       const answer = await request(routePath("createHandoff", { projectId, beamId, version }), {
         method: "POST",
         body,
-        parse: (d) => handoffResponseSchema.parse(d),
+        parse: parseWith("handoffResponseSchema"),
       });
       return answer.handoff;
     },
@@ -64,7 +59,7 @@ export function useOutbox(options: { enabled?: boolean; refetchInterval?: number
   return useQuery({
     queryKey: queryKeys.outbox,
     queryFn: async ({ signal }) => {
-      const body = await request(routePath("outbox"), { signal, parse: (d) => outboxResponseSchema.parse(d) });
+      const body = await request(routePath("outbox"), { signal, parse: parseWith("outboxResponseSchema") });
       return body.messages;
     },
     enabled: options.enabled ?? true,

@@ -1,13 +1,8 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import {
-  projectListResponseSchema,
-  projectResponseSchema,
-  routePath,
-  type CreateProjectRequest,
-  type Project,
-  type UpdateProjectRequest,
-} from "@spanwright/contracts";
+import type { CreateProjectRequest, Project, UpdateProjectRequest } from "@spanwright/contracts";
+import { routePath } from "@spanwright/contracts/routes";
 import { request } from "./client";
+import { parseWith } from "./schemas";
 import { queryKeys } from "./queryKeys";
 
 export function useProjects() {
@@ -16,7 +11,7 @@ export function useProjects() {
     queryFn: async ({ signal }) => {
       const body = await request(routePath("listProjects"), {
         signal,
-        parse: (d) => projectListResponseSchema.parse(d),
+        parse: parseWith("projectListResponseSchema"),
       });
       return body.projects;
     },
@@ -30,7 +25,7 @@ export function projectQueryOptions(projectId: string) {
     queryFn: async ({ signal }) => {
       const body = await request(routePath("getProject", { projectId }), {
         signal,
-        parse: (d) => projectResponseSchema.parse(d),
+        parse: parseWith("projectResponseSchema"),
       });
       return body.project;
     },
@@ -48,7 +43,7 @@ export function useCreateProject() {
       const body = await request(routePath("createProject"), {
         method: "POST",
         body: input,
-        parse: (d) => projectResponseSchema.parse(d),
+        parse: parseWith("projectResponseSchema"),
       });
       return body.project;
     },
@@ -66,7 +61,7 @@ export function useUpdateProject(projectId: string) {
       const body = await request(routePath("updateProject", { projectId }), {
         method: "PATCH",
         body: input,
-        parse: (d) => projectResponseSchema.parse(d),
+        parse: parseWith("projectResponseSchema"),
       });
       return body.project;
     },
