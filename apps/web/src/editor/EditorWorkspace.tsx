@@ -1,4 +1,4 @@
-import { useMemo, useState } from "react";
+import { useEffect, useMemo, useState } from "react";
 import { useEditor, useEditorStore } from "./store/useEditor";
 import { useAnalysis } from "./results/useAnalysis";
 import { locateError } from "./results/errorLocation";
@@ -15,6 +15,7 @@ import { LoadsTable } from "./tables/LoadsTable";
 import { CasesTable } from "./tables/CasesTable";
 import { CombinationsTable } from "./tables/CombinationsTable";
 import { TheorySettings } from "./design/TheorySettings";
+import { preloadDesignParts } from "./design/lazyDesign";
 
 const tabs = [
   { id: "nodes", label: "Nodes", Component: NodesTable },
@@ -35,6 +36,13 @@ export function EditorWorkspace() {
   const errorRange = useMemo(() => (analysis.status === "failed" ? locateError(analysis.error, doc) : null), [analysis, doc]);
   const [tab, setTab] = useState<TabId>("nodes");
   useShortcuts(store);
+  // The design parts (dialogs, checks, theory) load once the first results are on screen.
+  const settled = analysis.status !== "solving";
+  useEffect(() => {
+    if (!settled) return;
+    const whenIdle = window.requestIdleCallback ?? ((run: () => void) => window.setTimeout(run, 200));
+    whenIdle(() => preloadDesignParts());
+  }, [settled]);
   const Active = tabs.find((t) => t.id === tab)!.Component;
 
   return (

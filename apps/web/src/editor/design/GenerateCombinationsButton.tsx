@@ -1,9 +1,6 @@
-import { useMemo, useState } from "react";
-import { CombinationGenerator } from "../../design";
-import { addCombinations } from "../commands/designCommands";
-import { useEditor, useEditorStore } from "../store/useEditor";
-import { EditorDialog } from "./EditorDialog";
+import { Suspense, useState } from "react";
 import { useCanEdit } from "../store/useCanEdit";
+import { GenerateDialog } from "./lazyDesign";
 
 /** "Generate from code…": code-preset combinations for the load cases present, added in one undo step. */
 export function GenerateCombinationsButton({ className }: { className?: string }) {
@@ -12,27 +9,11 @@ export function GenerateCombinationsButton({ className }: { className?: string }
   return (
     <>
       <button type="button" className={className} disabled={!canEdit} onClick={() => setOpen(true)}>Generate from code…</button>
-      {open && <GenerateDialog onClose={() => setOpen(false)} />}
+      {open && (
+        <Suspense fallback={null}>
+          <GenerateDialog onClose={() => setOpen(false)} />
+        </Suspense>
+      )}
     </>
-  );
-}
-
-function GenerateDialog({ onClose }: { onClose: () => void }) {
-  const store = useEditorStore();
-  const loadCases = useEditor((s) => s.history.doc.loadCases);
-  const combinations = useEditor((s) => s.history.doc.combinations);
-  const cases = useMemo(() => loadCases.map((c) => ({ id: c.name, category: c.category })), [loadCases]);
-  // Case and combination names share one namespace in the exchange format.
-  const takenIds = useMemo(() => [...loadCases.map((c) => c.name), ...combinations.map((k) => k.name)], [loadCases, combinations]);
-  return (
-    <EditorDialog title="Generate load combinations from a code preset" onClose={onClose}>
-      <CombinationGenerator
-        cases={cases}
-        takenIds={takenIds}
-        onApply={(generated) => {
-          if (store.run((d) => addCombinations(d, { combinations: generated }))) onClose();
-        }}
-      />
-    </EditorDialog>
   );
 }

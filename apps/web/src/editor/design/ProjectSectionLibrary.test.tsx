@@ -48,7 +48,8 @@ function open(store: EditorStore, answers: Parameters<typeof stubFetch>[0], call
   );
   renderRoutes([{ path: "/projects/:projectId/beams/:beamId", element }], `/projects/${projectId}/beams/${beamId}`);
   fireEvent.click(screen.getByRole("button", { name: "Section of segment 1" }));
-  return screen.getByRole("dialog");
+  // the dialog is its own chunk (lazyDesign.ts): it appears once loaded
+  return screen.findByRole("dialog");
 }
 
 const listPath = `/api/projects/${projectId}/sections`;
@@ -56,7 +57,7 @@ const listPath = `/api/projects/${projectId}/sections`;
 describe("the project section library in the Section dialog", () => {
   it("picks a saved section, fills the shape and material, and applies it to the segment", async () => {
     const store = new EditorStore(twoSpanDocument());
-    const dialog = open(store, { [`GET ${listPath}`]: { status: 200, body: { sections: [canopyBeam] } } });
+    const dialog = await open(store, { [`GET ${listPath}`]: { status: 200, body: { sections: [canopyBeam] } } });
     const select = await within(dialog).findByRole("combobox", { name: "Saved project sections" });
     await waitFor(() => expect((select as HTMLSelectElement).disabled).toBe(false));
     fireEvent.change(select, { target: { value: canopyBeam.id } });
@@ -73,7 +74,7 @@ describe("the project section library in the Section dialog", () => {
   it("saves the typed section to the project library under a name", async () => {
     const store = new EditorStore(twoSpanDocument());
     const calls: { key: string; body: unknown }[] = [];
-    const dialog = open(
+    const dialog = await open(
       store,
       {
         [`GET ${listPath}`]: { status: 200, body: { sections: [] } },
@@ -91,7 +92,7 @@ describe("the project section library in the Section dialog", () => {
 
   it("offers picking but not saving to a read-only role", async () => {
     const store = new EditorStore(twoSpanDocument(), { canEdit: false });
-    const dialog = open(store, { [`GET ${listPath}`]: { status: 200, body: { sections: [canopyBeam] } } });
+    const dialog = await open(store, { [`GET ${listPath}`]: { status: 200, body: { sections: [canopyBeam] } } });
     await within(dialog).findByRole("option", { name: /Canopy glulam/ });
     expect(within(dialog).queryByRole("button", { name: "Save to project library" })).toBeNull();
     expect((within(dialog).getByRole("button", { name: "Apply to segment 1" }) as HTMLButtonElement).disabled).toBe(true);

@@ -1,38 +1,19 @@
-import { useMemo } from "react";
-import { sectionProperties } from "@spanwright/solver/design";
-import { TheoryPanel } from "../../design";
-import { setTheory } from "../commands/documentCommands";
-import { toExchange } from "../model/exchange";
-import { useEditor, useEditorStore } from "../store/useEditor";
-import { beamSection } from "./beamSection";
-import { useCanEdit } from "../store/useCanEdit";
+import { Suspense, useState } from "react";
+import { TheoryDetails } from "./lazyDesign";
 
-/** Beam settings: Euler-Bernoulli or Timoshenko (undoable), with the shear share per span. */
+/** Beam settings: Euler-Bernoulli or Timoshenko (undoable), with the shear share per span. Closed
+ * at first; its inside (and the design chunk) loads when it is opened. */
 export function TheorySettings() {
-  const store = useEditorStore();
-  const doc = useEditor((s) => s.history.doc);
-  const { nodes, segments, loadCases, combinations, theory, stations } = doc;
-  const model = useMemo(
-    () => toExchange({ title: "", units: "si", nodes, segments, loadCases, combinations, theory, stations }),
-    [nodes, segments, loadCases, combinations, theory, stations],
-  );
-  const canEdit = useCanEdit();
-  const chosen = beamSection(doc);
-  const props = chosen ? sectionProperties(chosen.section.shape) : null;
-  const G = chosen?.section.material.G;
+  const [opened, setOpened] = useState(false);
   return (
-    <details className="rounded-md border border-paper-300 bg-white px-3 py-2">
+    <details className="rounded-md border border-paper-300 bg-white px-3 py-2" onToggle={(e) => e.currentTarget.open && setOpened(true)}>
       <summary className="cursor-pointer text-sm font-semibold text-ink-900">Beam theory and shear deformation</summary>
       <div className="mt-2">
-        <TheoryPanel
-          model={model}
-          theory={theory}
-          units={doc.units}
-          {...(canEdit ? { onTheoryChange: (t: typeof theory) => store.run((d) => setTheory(d, { theory: t })) } : {})}
-          {...(props?.ok ? { depth: props.value.depth } : {})}
-          fallback={{ ...(G !== undefined ? { G } : {}), shearArea: props?.ok ? props.value.shearArea : null }}
-        />
-        {!chosen && <p className="mt-1 text-xs text-paper-600">The span-to-depth hint needs a section: “Section…” in the Segments table.</p>}
+        {opened && (
+          <Suspense fallback={<p className="text-sm text-paper-600">Loading…</p>}>
+            <TheoryDetails />
+          </Suspense>
+        )}
       </div>
     </details>
   );

@@ -84,11 +84,11 @@ describe("the Checks tab in the editor", () => {
 });
 
 describe("Generate from code… in the combinations table", () => {
-  it("applies ASCE 7-22 LRFD 1.2D + 1.6L into the document as one undo step", () => {
+  it("applies ASCE 7-22 LRFD 1.2D + 1.6L into the document as one undo step", async () => {
     const store = new EditorStore(demoDocument());
     render(withStore(store, <CombinationsTable />));
     fireEvent.click(screen.getByRole("button", { name: "Generate from code…" }));
-    const dialog = screen.getByRole("dialog");
+    const dialog = await screen.findByRole("dialog"); // its own chunk (lazyDesign.ts)
     fireEvent.click(within(dialog).getByRole("button", { name: /Apply 2 combinations/ }));
     expect(screen.queryByRole("dialog")).toBeNull();
     const [D, L] = store.doc.loadCases;
@@ -102,13 +102,13 @@ describe("Generate from code… in the combinations table", () => {
 });
 
 describe("Section… in the segments table", () => {
-  it("applies the default steel I-section to the segment, setting E and I from it", () => {
+  it("applies the default steel I-section to the segment, setting E and I from it", async () => {
     const r = fromExchange(demo);
     if (!r.ok) throw new Error(r.error.message);
     const store = new EditorStore(r.doc);
     render(withStore(store, <SegmentsTable />));
     fireEvent.click(screen.getByRole("button", { name: "Section of segment 1" }));
-    fireEvent.click(within(screen.getByRole("dialog")).getByRole("button", { name: "Apply to segment 1" }));
+    fireEvent.click(within(await screen.findByRole("dialog")).getByRole("button", { name: "Apply to segment 1" }));
     const segment = store.doc.segments[0]!;
     expect(segment.section?.shape.kind).toBe("i-shape");
     expect(segment.E).toBe(steel.E);

@@ -13,7 +13,7 @@ import { ResultsPanel } from "./ResultsPanel";
 vi.mock("./DiagramsStage", () => ({ DiagramsStage: () => null }));
 
 describe("the results area", () => {
-  it("switches from the diagrams to the member checks of the open beam", () => {
+  it("switches from the diagrams to the member checks of the open beam", async () => {
     const store = new EditorStore(createTemplate("simple-span", "si"));
     store.run((d) => setSegmentSection(d, { segmentIds: d.segments.map((s) => s.id), shape: { kind: "i-shape", d: 0.4, bf: 0.18, tf: 0.012, tw: 0.008 }, material: findMaterialPreset("steel-a992")! }));
     const analysis = analyze(beamModelSchema.parse(toExchange(store.doc)));
@@ -23,7 +23,8 @@ describe("the results area", () => {
       </EditorStoreContext.Provider>,
     );
     // The section view is keyboard-reachable: typing x works like clicking the diagrams.
-    const x = screen.getByLabelText(/^Section view x/);
+    // (the section view and the checks are chunks of their own: lazyDesign.ts)
+    const x = await screen.findByLabelText(/^Section view x/);
     fireEvent.change(x, { target: { value: "3" } });
     fireEvent.keyDown(x, { key: "Enter" });
     expect(store.getState().ui.sectionX).toBe(3);
@@ -31,7 +32,7 @@ describe("the results area", () => {
     expect(screen.queryByRole("table", { name: "Member checks" })).toBeNull();
     fireEvent.click(screen.getByRole("button", { name: "Checks" }));
     expect(screen.getByRole("button", { name: "Checks" }).getAttribute("aria-pressed")).toBe("true");
-    const table = screen.getByRole("table", { name: "Member checks" });
+    const table = await screen.findByRole("table", { name: "Member checks" });
     expect(within(table).getAllByText(/flexure/i).length).toBeGreaterThan(0);
   });
 });

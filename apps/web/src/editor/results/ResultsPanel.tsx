@@ -1,4 +1,4 @@
-import { useRef, useState } from "react";
+import { Suspense, useRef, useState } from "react";
 import { useEditor, useEditorStore } from "../store/useEditor";
 import { useElementWidth } from "../view/useElementWidth";
 import type { AnalysisState } from "./useAnalysis";
@@ -6,8 +6,7 @@ import { DiagramsStage } from "./DiagramsStage";
 import { ResultTargetSelect } from "./ResultTargetSelect";
 import { ResultsReadout } from "./ResultsReadout";
 import { defaultTarget, targetName } from "./resultSeries";
-import { EditorChecks } from "../design/EditorChecks";
-import { SectionAtCursor } from "../design/SectionAtCursor";
+import { EditorChecks, SectionAtCursor } from "../design/lazyDesign";
 
 type ResultsTab = "diagrams" | "checks";
 const resultsTabs: readonly { id: ResultsTab; label: string }[] = [
@@ -75,13 +74,17 @@ export function ResultsPanel({ state }: { state: AnalysisState }) {
             {state.status === "ready" && name && <ResultsReadout analysis={state.analysis} name={name} isEnvelope={isEnvelope} hoverX={hoverX} units={doc.units} />}
           </div>
           {state.status === "ready" && (
-            <SectionAtCursor doc={doc} analysis={state.analysis} name={isEnvelope ? null : name} x={sectionX} onX={(x) => store.setUi({ sectionX: x })} />
+            <Suspense fallback={null}>
+              <SectionAtCursor doc={doc} analysis={state.analysis} name={isEnvelope ? null : name} x={sectionX} onX={(x) => store.setUi({ sectionX: x })} />
+            </Suspense>
           )}
         </div>
       ) : (
         <div role="region" aria-label="Member checks on this beam" className="rounded-md border border-paper-300 bg-white">
           {state.status === "ready" ? (
-            <EditorChecks doc={doc} analysis={state.analysis} segmentId={selection?.kind === "segment" ? selection.id : null} />
+            <Suspense fallback={<p className="p-4 text-sm text-paper-600">Loading the checks…</p>}>
+              <EditorChecks doc={doc} analysis={state.analysis} segmentId={selection?.kind === "segment" ? selection.id : null} />
+            </Suspense>
           ) : (
             <p className="p-4 text-sm text-paper-600">{state.status === "solving" ? "Solving…" : "The checks need a beam that solves."}</p>
           )}
