@@ -1,9 +1,9 @@
-import { useEffect, useMemo, useRef, useState } from "react";
+import { useEffect, useMemo, useState } from "react";
 import type { Analysis } from "@spanwright/solver";
 import type { BeamDocument } from "../model/BeamDocument";
 import { toExchange } from "../model/exchange";
-import type { SolveFailure, SolveRequest, SolveResponse } from "./solveMessages";
-import { getSolverWorker, nextSolveSeq } from "./solverWorker";
+import type { SolveFailure, SolveResponse } from "./solveMessages";
+import { onSolveAnswer, requestSolve, solveAnswer } from "./solverWorker";
 
 export type AnalysisState =
   | { readonly status: "solving"; readonly analysis: null; readonly error: null }
@@ -11,9 +11,20 @@ export type AnalysisState =
   | { readonly status: "failed"; readonly analysis: null; readonly error: SolveFailure };
 
 const solving: AnalysisState = { status: "solving", analysis: null, error: null };
+const noWorker: AnalysisState = {
+  status: "failed",
+  analysis: null,
+  error: { code: "internal", message: "This browser cannot run the engine in the background (no Web Worker support).", where: "" },
+};
 
 function toState(response: SolveResponse): AnalysisState {
   return response.ok ? { status: "ready", analysis: response.analysis, error: null } : { status: "failed", analysis: null, error: response.error };
+}
+
+function stateOf(seq: number | null): AnalysisState | null {
+  if (seq === null) return noWorker;
+  const answer = solveAnswer(seq);
+  return answer ? toState(answer) : null;
 }
 
 /**
@@ -29,29 +40,21 @@ export function useAnalysis(doc: BeamDocument): AnalysisState {
     () => toExchange({ title: "", units: "si", nodes, segments, loadCases, combinations, theory, stations }),
     [nodes, segments, loadCases, combinations, theory, stations],
   );
-  const [state, setState] = useState<AnalysisState>(solving);
-  const seq = useRef(0);
+  // Asked while rendering, not in an effect after the commit: the worker solves while React still
+  // renders and draws the rest of the editor, so a beam's first diagrams come sooner. One request
+  // per model; a render React discards costs only a solve whose answer nobody reads.
+  const seq = useMemo(() => requestSolve(model), [model]);
+  // Until the answer comes, the last state stays (the diagrams do not flicker while typing).
+  const [state, setState] = useState<AnalysisState>(() => stateOf(seq) ?? solving);
 
   useEffect(() => {
-    const w = getSolverWorker();
-    if (!w) return;
-    const onMessage = (event: MessageEvent<SolveResponse>) => {
-      if (event.data.seq === seq.current) setState(toState(event.data));
-    };
-    w.addEventListener("message", onMessage);
-    return () => w.removeEventListener("message", onMessage);
-  }, []);
-
-  useEffect(() => {
-    const w = getSolverWorker();
-    seq.current = nextSolveSeq();
-    if (w) {
-      const request: SolveRequest = { seq: seq.current, model };
-      w.postMessage(request);
-      return;
-    }
-    setState({ status: "failed", analysis: null, error: { code: "internal", message: "This browser cannot run the engine in the background (no Web Worker support).", where: "" } });
-  }, [model]);
+    const known = stateOf(seq);
+    if (known) setState(known);
+    if (seq === null) return;
+    return onSolveAnswer((answer) => {
+      if (answer.seq === seq) setState(toState(answer));
+    });
+  }, [seq]);
 
   return state;
 }
