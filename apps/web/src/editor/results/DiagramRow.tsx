@@ -1,4 +1,4 @@
-import { Circle, Group, Line, Rect, Text } from "react-konva";
+import { Circle, Group, Line, Rect, Text } from "../view/konva";
 import type { Quantity } from "@spanwright/solver";
 import { worldToScreenX, type Camera } from "../geometry/camera";
 import { formatQuantity } from "../units/formatQuantity";

@@ -1,5 +1,5 @@
 import { useMemo } from "react";
-import { Layer, Line, Stage } from "react-konva";
+import { Layer, Line, Stage } from "../view/konva";
 import type { Analysis } from "@spanwright/solver";
 import type { Camera } from "../geometry/camera";
 import { screenToWorldX, worldToScreenX } from "../geometry/camera";

@@ -1,4 +1,4 @@
-import { Group, Line, Text } from "react-konva";
+import { Group, Line, Text } from "./konva";
 import type { BeamDocument } from "../model/BeamDocument";
 import { BEAM_Y } from "../geometry/sceneLayout";
 import { formatFeetInches, formatQuantity } from "../units/formatQuantity";

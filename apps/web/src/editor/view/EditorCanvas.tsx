@@ -1,5 +1,5 @@
 import { useEffect, useMemo, useRef, type PointerEvent as ReactPointerEvent } from "react";
-import { Stage } from "react-konva";
+import { Stage } from "./konva";
 import type Konva from "konva";
 import { fitCamera, screenToWorldX, zoomAt, panBy } from "../geometry/camera";
 import { hitTest } from "../geometry/hitTest";

@@ -1,4 +1,4 @@
-import { Circle, Layer, Line, Rect } from "react-konva";
+import { Circle, Layer, Line, Rect } from "./konva";
 import { BEAM_Y, MODEL_HEIGHT, type SceneLayout } from "../geometry/sceneLayout";
 import { worldToScreenX, type Camera } from "../geometry/camera";
 import type { Selection } from "../store/uiState";

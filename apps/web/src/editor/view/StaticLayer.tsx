@@ -1,5 +1,5 @@
 import { memo } from "react";
-import { Circle, Layer, Line, Rect } from "react-konva";
+import { Circle, Layer, Line, Rect } from "./konva";
 import type { BeamDocument } from "../model/BeamDocument";
 import { BEAM_THICKNESS, BEAM_Y, MODEL_HEIGHT, type SceneLayout } from "../geometry/sceneLayout";
 import type { Camera } from "../geometry/camera";

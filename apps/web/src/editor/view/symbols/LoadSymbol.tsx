@@ -1,4 +1,4 @@
-import { Arc, Arrow, Group, Line, Text } from "react-konva";
+import { Arc, Arrow, Group, Line, Text } from "../konva";
 import type { LoadShape } from "../../geometry/sceneLayout";
 import { BEAM_Y } from "../../geometry/sceneLayout";
 import { formatQuantity } from "../../units/formatQuantity";

@@ -1,4 +1,4 @@
-import { Circle, Group, Line } from "react-konva";
+import { Circle, Group, Line } from "../konva";
 import type { Support } from "../../model/BeamDocument";
 import { colors } from "../colors";
 
