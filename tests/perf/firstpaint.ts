@@ -18,7 +18,10 @@
  * Vite manifest (dist/.vite/manifest.json). Everything it started is stopped at the end.
  *
  * Environment: FIRSTPAINT_RUNS, FIRSTPAINT_BEAM (beam name prefix, default "RB-2"),
- * FIRSTPAINT_VERBOSE=1 (the median run's requests on a timeline), SPANWRIGHT_CHROMIUM.
+ * FIRSTPAINT_VERBOSE=1 (the median run's requests on a timeline), FIRSTPAINT_PROFILE=1 (the
+ * median run's main-thread CPU by function), FIRSTPAINT_COMPARE=<another build's dist folder>
+ * (a second server serves it; runs alternate between the two builds, so both see the same load:
+ * keep a copy of dist from before a change to compare with), SPANWRIGHT_CHROMIUM.
  */
 import { execFileSync, spawn, type ChildProcess } from "node:child_process";
 import fs from "node:fs";
@@ -36,6 +39,8 @@ const chromiumPath = process.env.SPANWRIGHT_CHROMIUM ?? "/usr/bin/chromium";
 const runs = Math.max(1, Number(process.env.FIRSTPAINT_RUNS ?? 5));
 const beamPrefix = process.env.FIRSTPAINT_BEAM ?? "RB-2";
 const verbose = process.env.FIRSTPAINT_VERBOSE === "1";
+const profiling = process.env.FIRSTPAINT_PROFILE === "1";
+const compareDir = process.env.FIRSTPAINT_COMPARE;
 const demo = { email: "demo@spanwright.test", password: "spanwright-demo" };
 const chromiumArgs = ["--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"];
 const pageTimeoutMs = 60_000;
@@ -45,10 +50,23 @@ const pageTimeoutMs = 60_000;
 // frame for the two canvases and keeps the first moment each has drawn pixels.
 
 // Plain JavaScript text, not a function: tsx would add helpers (__name) the page does not have.
-// It sets window.__firstPaint = { canvas, diagrams } (ms since the navigation started, or null).
+// It sets window.__firstPaint = { canvas, diagrams, ... } (ms since the navigation started, or null).
 const probe = `(() => {
-  const marks = { canvas: null, diagrams: null };
+  const marks = { canvas: null, diagrams: null, worker: null, solveAsked: null, solveAnswered: null };
   window.__firstPaint = marks;
+  // when the engine worker starts, is first asked to solve, and first answers (FIRSTPAINT_VERBOSE)
+  const NativeWorker = window.Worker;
+  window.Worker = class extends NativeWorker {
+    constructor(...args) {
+      super(...args);
+      if (marks.worker === null) marks.worker = performance.now();
+      this.addEventListener("message", () => { if (marks.solveAnswered === null) marks.solveAnswered = performance.now(); });
+    }
+    postMessage(...args) {
+      if (marks.solveAsked === null) marks.solveAsked = performance.now();
+      return super.postMessage(...args);
+    }
+  };
   const hasPixels = (scope) => {
     for (const canvas of document.querySelectorAll(scope + " canvas")) {
       if (canvas.width === 0 || canvas.height === 0) continue;
@@ -106,13 +124,16 @@ function freePort(): Promise<number> {
   });
 }
 
-/** A copy of the build without source maps (others may rebuild apps/web/dist meanwhile). */
-function snapshotDist(): string {
+/** A copy of a build without source maps (others may rebuild apps/web/dist meanwhile). */
+function snapshotDist(dir: string): string {
+  if (!fs.existsSync(path.join(dir, "index.html"))) {
+    throw new Error(`no build in ${dir}: run \`pnpm --filter @spanwright/web build\` first`);
+  }
   const copy = fs.mkdtempSync(path.join(os.tmpdir(), "spanwright-firstpaint-web-"));
-  fs.cpSync(distDir, copy, { recursive: true, filter: (source) => !source.endsWith(".map") });
+  fs.cpSync(dir, copy, { recursive: true, filter: (source) => !source.endsWith(".map") });
   const html = fs.readFileSync(path.join(copy, "index.html"), "utf8");
   const missing = [...html.matchAll(/(?:src|href)="\/([^"]+\.(?:js|css))"/g)].map((m) => m[1]!).filter((a) => !fs.existsSync(path.join(copy, a)));
-  if (missing.length > 0) throw new Error(`apps/web/dist changed while being copied (a build is running?); run again when it is done`);
+  if (missing.length > 0) throw new Error(`${dir} changed while being copied (a build is running?); run again when it is done`);
   return copy;
 }
 
@@ -191,7 +212,30 @@ async function demoBeamPath(baseUrl: string): Promise<{ path: string; name: stri
 interface RunFigures {
   canvas: number;
   diagrams: number;
+  /** The engine worker's start, first solve request and first answer. */
+  worker: { start: number | null; asked: number | null; answered: number | null };
   requests: Array<{ name: string; start: number; end: number; bytes: number }>;
+  /** Main-thread CPU ms by function until the diagrams were drawn (FIRSTPAINT_PROFILE=1). */
+  profile?: Map<string, number>;
+}
+
+interface CpuProfile {
+  nodes: Array<{ id: number; callFrame: { functionName: string; url: string; lineNumber: number } }>;
+  startTime: number;
+  samples: number[];
+  timeDeltas: number[];
+}
+
+/** Self time per function (name, file and line) over the whole profile (idle time left out). */
+function selfTimes(profile: CpuProfile): Map<string, number> {
+  const names = new Map(profile.nodes.map((n) => [n.id, `${n.callFrame.functionName || "(anonymous)"} ${path.basename(n.callFrame.url)}:${n.callFrame.lineNumber + 1}`]));
+  const out = new Map<string, number>();
+  for (let i = 0; i < profile.samples.length; i++) {
+    const name = names.get(profile.samples[i]!)!;
+    if (name.startsWith("(idle)")) continue;
+    out.set(name, (out.get(name) ?? 0) + (profile.timeDeltas[i + 1] ?? 0) / 1000);
+  }
+  return out;
 }
 
 async function measureOnce(browser: Browser, baseUrl: string, beamPath: string, beamName: string): Promise<RunFigures> {
@@ -209,16 +253,33 @@ async function measureOnce(browser: Browser, baseUrl: string, beamPath: string, 
 
     const page = await context.newPage();
     await page.addInitScript({ content: probe });
+    const cdp = profiling ? await context.newCDPSession(page) : null;
+    if (cdp) {
+      await cdp.send("Profiler.enable");
+      await cdp.send("Profiler.setSamplingInterval", { interval: 200 });
+      await cdp.send("Profiler.start");
+    }
     await page.goto(beamPath, { waitUntil: "commit" });
-    // strings, not functions: they run in the page (no DOM types here, and no tsx helpers there)
-    await page.waitForFunction("window.__firstPaint.canvas !== null && window.__firstPaint.diagrams !== null", null, { timeout: pageTimeoutMs, polling: 100 });
+    // Run in the page: globalThis is its window (no DOM types here). No named inner functions, for
+    // which tsx would add a helper (__name) the page does not have; no strings, which the CSP refuses.
+    await page.waitForFunction(() => {
+      const marks = (globalThis as any).__firstPaint;
+      return marks.canvas !== null && marks.diagrams !== null;
+    }, null, { timeout: pageTimeoutMs, polling: 100 });
     await page.getByRole("heading", { level: 1, name: beamName }).waitFor();
-    const marks = (await page.evaluate("window.__firstPaint")) as { canvas: number; diagrams: number };
-    const requests = (await page.evaluate(
-      `performance.getEntriesByType("resource").map((r) => ({ name: new URL(r.name).pathname, start: r.startTime, end: r.responseEnd, bytes: r.transferSize }))`,
+    const marks = (await page.evaluate(() => (globalThis as any).__firstPaint)) as Record<"canvas" | "diagrams", number> & Record<"worker" | "solveAsked" | "solveAnswered", number | null>;
+    const requests = (await page.evaluate(() =>
+      (globalThis as any).performance
+        .getEntriesByType("resource")
+        .map((r: any) => ({ name: new URL(r.name).pathname, start: r.startTime, end: r.responseEnd, bytes: r.transferSize })),
     )) as RunFigures["requests"];
+    let profile: Map<string, number> | undefined;
+    if (cdp) {
+      const answer = (await cdp.send("Profiler.stop")) as unknown as { profile: CpuProfile };
+      profile = selfTimes(answer.profile);
+    }
     await page.close();
-    return { canvas: marks.canvas, diagrams: marks.diagrams, requests };
+    return { canvas: marks.canvas, diagrams: marks.diagrams, worker: { start: marks.worker, asked: marks.solveAsked, answered: marks.solveAnswered }, requests, ...(profile ? { profile } : {}) };
   } finally {
     await context.close();
   }
@@ -308,13 +369,45 @@ const median = (values: number[]) => {
 const ms = (n: number) => `${Math.round(n)} ms`;
 const load = () => os.loadavg().map((l) => l.toFixed(2)).join(" ");
 
-async function main(): Promise<void> {
-  if (!fs.existsSync(path.join(distDir, "index.html"))) {
-    throw new Error("the web app is not built: run `pnpm --filter @spanwright/web build` first");
+interface Build {
+  label: string;
+  /** The private copy served. */
+  dir: string;
+  baseUrl: string;
+  figures: RunFigures[];
+}
+
+function printFigures(build: Build): void {
+  const { figures } = build;
+  const canvas = median(figures.map((f) => f.canvas));
+  const diagrams = median(figures.map((f) => f.diagrams));
+  console.log(`\n${build.label}: median of ${figures.length}: first canvas paint ${ms(canvas)}, diagrams drawn ${ms(diagrams)} (target < 1000 ms)`);
+  const mid = [...figures].sort((a, b) => a.diagrams - b.diagrams)[Math.floor(figures.length / 2)]!;
+  if (verbose) {
+    console.log("requests of the median run (start → end, ms from navigation; 0 bytes = from cache):");
+    for (const r of [...mid.requests].sort((a, b) => a.start - b.start)) {
+      console.log(`  ${ms(r.start).padStart(8)} → ${ms(r.end).padStart(8)}  ${String(r.bytes).padStart(7)} B  ${r.name}`);
+    }
+    const w = mid.worker;
+    const at = (t: number | null) => (t === null ? "never" : ms(t));
+    console.log(`engine worker: started ${at(w.start)}, first solve asked ${at(w.asked)}, answered ${at(w.answered)}; canvas ${ms(mid.canvas)}, diagrams ${ms(mid.diagrams)}`);
   }
+  if (mid.profile) {
+    const top = [...mid.profile].sort((a, b) => b[1] - a[1]);
+    const total = top.reduce((sum, [, t]) => sum + t, 0);
+    console.log(`main-thread CPU of the median run: ${ms(total)} busy; most self time:`);
+    for (const [name, t] of top.slice(0, 25)) console.log(`  ${ms(t).padStart(8)}  ${name}`);
+  }
+}
+
+async function main(): Promise<void> {
   if (!fs.existsSync(chromiumPath)) throw new Error(`no Chromium at ${chromiumPath}; install it with: bash scripts/bootstrap.sh --browser`);
-  const webDir = snapshotDist();
-  stops.push(() => fs.rmSync(webDir, { recursive: true, force: true }));
+  const sources = [{ label: path.relative(root, distDir), dir: distDir }, ...(compareDir ? [{ label: compareDir, dir: path.resolve(compareDir) }] : [])];
+  const copies = sources.map((source) => {
+    const copy = snapshotDist(source.dir);
+    stops.push(() => fs.rmSync(copy, { recursive: true, force: true }));
+    return { label: source.label, dir: copy };
+  });
 
   const startedDb = !dbIsRunning();
   db("start");
@@ -327,34 +420,32 @@ async function main(): Promise<void> {
   execFileSync("pnpm", ["--silent", "--filter", "@spanwright/api", "run", "migrate"], { cwd: root, env: apiEnv, stdio: ["ignore", "ignore", "inherit"] });
   execFileSync("pnpm", ["--silent", "--filter", "@spanwright/api", "run", "seed"], { cwd: root, env: apiEnv, stdio: ["ignore", "ignore", "inherit"] });
 
-  const baseUrl = await startServer(webDir, databaseUrl);
-  const beam = await demoBeamPath(baseUrl);
+  // one server per build (FIRSTPAINT_COMPARE), on the same database; runs alternate between them
+  const builds: Build[] = [];
+  for (const copy of copies) builds.push({ ...copy, baseUrl: await startServer(copy.dir, databaseUrl), figures: [] });
+  const beam = await demoBeamPath(builds[0]!.baseUrl);
   const browser = await chromium.launch({ executablePath: chromiumPath, headless: true, args: chromiumArgs });
   stops.push(() => browser.close());
 
-  console.log(`first paint of "${beam.name}" (${baseUrl}${beam.path}), production build, Chromium headless 1400×1000`);
+  console.log(`first paint of "${beam.name}" (${beam.path}), production build, Chromium headless 1400×1000`);
   console.log(`load average before: ${load()} (${os.cpus().length} cores)`);
-  const warmUp = await measureOnce(browser, baseUrl, beam.path, beam.name);
-  console.log(`warm-up (not counted): canvas ${ms(warmUp.canvas)}, diagrams ${ms(warmUp.diagrams)}`);
-  const figures: RunFigures[] = [];
-  for (let i = 0; i < runs; i++) {
-    const f = await measureOnce(browser, baseUrl, beam.path, beam.name);
-    figures.push(f);
-    console.log(`run ${i + 1}: canvas ${ms(f.canvas)}, diagrams ${ms(f.diagrams)}`);
+  for (const build of builds) {
+    const warmUp = await measureOnce(browser, build.baseUrl, beam.path, beam.name);
+    console.log(`${build.label}: warm-up (not counted): canvas ${ms(warmUp.canvas)}, diagrams ${ms(warmUp.diagrams)}`);
   }
-  console.log(`load average after: ${load()}`);
-  const canvas = median(figures.map((f) => f.canvas));
-  const diagrams = median(figures.map((f) => f.diagrams));
-  console.log(`\nmedian of ${runs}: first canvas paint ${ms(canvas)}, diagrams drawn ${ms(diagrams)} (target < 1000 ms)`);
-
-  if (verbose) {
-    const mid = [...figures].sort((a, b) => a.diagrams - b.diagrams)[Math.floor(figures.length / 2)]!;
-    console.log("\nrequests of the median run (start → end, ms from navigation; 0 bytes = from cache):");
-    for (const r of [...mid.requests].sort((a, b) => a.start - b.start)) {
-      console.log(`  ${ms(r.start).padStart(8)} → ${ms(r.end).padStart(8)}  ${String(r.bytes).padStart(7)} B  ${r.name}`);
+  for (let i = 0; i < runs; i++) {
+    for (const build of builds) {
+      const f = await measureOnce(browser, build.baseUrl, beam.path, beam.name);
+      build.figures.push(f);
+      console.log(`${build.label}: run ${i + 1}: canvas ${ms(f.canvas)}, diagrams ${ms(f.diagrams)}`);
     }
   }
-  printSizes(webDir);
+  console.log(`load average after: ${load()}`);
+  for (const build of builds) printFigures(build);
+  for (const build of builds) {
+    if (builds.length > 1) console.log(`\n===== bundle sizes of ${build.label}`);
+    printSizes(build.dir);
+  }
 }
 
 try {
