@@ -27,8 +27,23 @@ const section = (id: string, name: string, d: number) => ({
 const first = section("0b6c1e52-3f4a-4d8b-9a7c-5e2f1d3c4b5a", "Mezzanine I-300", 0.3);
 const second = section("1c7d2f63-4a5b-4e9c-8b8d-6f3a2e4d5c6b", "Mezzanine I-360", 0.36);
 
-function renderLink(units: "si" | "us") {
-  vi.stubGlobal("fetch", stubFetch({ [`GET /api/projects/${P}/sections`]: { status: 200, body: { sections: [first, second] } } }));
+/** Invented saved design settings: the first section, ASD, braces every 2 m. */
+const saved = { section: { source: "project", sectionId: first.id }, material: null, method: "ASD", lb: 2, cb: "equation-f1-1", strengthIds: null, deflection: null, allowableBending: null, allowableShear: null };
+
+function renderLink(units: "si" | "us", designSettings: unknown = null) {
+  const beam = {
+    beam: { id: B, projectId: P, name: "B-12", latestVersion: 3, createdAt: when, updatedAt: when },
+    revision: {
+      version: 3, author: { id: "u1", name: "Odile Marsh" }, createdAt: when, changeSummary: "", status: "draft", checkedBy: null, checkedAt: null, checkComment: null,
+      model: { format: "spanwright.beam/1", nodes: [{ x: 0, support: { type: "pinned" } }, { x: 5, support: { type: "pinned" } }], segments: [{ E: 200e9, I: 7.41e-5 }], loadCases: [], combinations: [] },
+      result: { format: "spanwright.result/1", results: {}, envelopes: {} },
+    },
+    designSettings,
+  };
+  vi.stubGlobal("fetch", stubFetch({
+    [`GET /api/projects/${P}/sections`]: { status: 200, body: { sections: [first, second] } },
+    [`GET /api/projects/${P}/beams/${B}`]: { status: 200, body: beam },
+  }));
   renderWithProviders(<ChecksReportLink projectId={P} beamId={B} version={3} units={units} />);
 }
 
@@ -55,9 +70,29 @@ describe("ChecksReportLink", () => {
     expect(url.searchParams.get("sectionId")).toBe(first.id);
     expect(url.searchParams.get("method")).toBe("LRFD");
     expect(url.searchParams.has("lb")).toBe(false);
+    expect(screen.getByText(/empty: at the supports only/)).toBeTruthy();
     fireEvent.change(screen.getByLabelText(/Unbraced length Lb/), { target: { value: "0" } });
     expect(screen.queryByRole("link", { name: "PDF report with member checks" })).toBeNull();
     expect(screen.getByText("Lb must be greater than zero.")).toBeTruthy();
+  });
+});
+
+describe("ChecksReportLink on a beam with saved design settings", () => {
+  it("says an empty Lb is the saved one and leaves it out of the link, so the report reads it", async () => {
+    renderLink("si", saved);
+    const field = (await screen.findByLabelText(/Unbraced length Lb/)) as HTMLInputElement;
+    expect(field.placeholder).toBe("saved: 2 m");
+    expect(screen.getByText(/empty: the beam's saved Lb of 2 m/)).toBeTruthy();
+    expect(screen.queryByText(/at the supports only$/)).toBeNull();
+    expect(hrefOf().searchParams.has("lb")).toBe(false);
+    fireEvent.change(field, { target: { value: "3" } });
+    expect(Number(hrefOf().searchParams.get("lb"))).toBe(3);
+  });
+
+  it("shows the saved Lb in the project's units", async () => {
+    renderLink("us", saved);
+    // 2 m / 0.3048 m/ft = 6.5617 ft (NIST SP 811, appendix B), shown to 4 significant digits
+    expect(((await screen.findByLabelText(/Unbraced length Lb/)) as HTMLInputElement).placeholder).toBe("saved: 6.562 ft");
   });
 });
 

@@ -1,15 +1,18 @@
 import { useState } from "react";
+import { useBeam } from "../api/beams";
 import { reportPdfWithChecksUrl, useSections } from "../api/sections";
 import { SelectField } from "../components/SelectField";
 import { TextField } from "../components/TextField";
+import { formatQuantity } from "../editor/units/formatQuantity";
 import { parseQuantity } from "../editor/units/parseQuantity";
 import { displayUnitLabel, type UnitSystemId } from "../editor/units/unitSystems";
 
 type Method = "LRFD" | "ASD";
 
 /**
- * Unbraced length typed in the project's units ("3.5", "12 ft", "3500 mm") to metres; empty means
- * braced at the supports only. The API refuses Lb ≤ 0, so the link is withheld for it.
+ * Unbraced length typed in the project's units ("3.5", "12 ft", "3500 mm") to metres; empty (null)
+ * leaves Lb out of the link, so the report uses the beam's saved Lb, or braces at the supports
+ * only when none is saved. The API refuses Lb ≤ 0, so the link is withheld for it.
  */
 export function parseUnbracedLength(text: string, units: UnitSystemId): { ok: true; lb: number | null } | { ok: false; message: string } {
   if (text.trim() === "") return { ok: true, lb: null };
@@ -19,16 +22,38 @@ export function parseUnbracedLength(text: string, units: UnitSystemId): { ok: tr
   return { ok: true, lb: parsed.value };
 }
 
-/** The PDF report of one revision with the member checks of a project section, method and Lb of the user's choice. */
+/**
+ * What an empty Lb field stands for: the report reads Lb from the beam's saved design settings when
+ * the link leaves it out, and braces at the supports only when none is saved.
+ */
+function emptyLbMeaning(savedLb: number | null | undefined, units: UnitSystemId): { placeholder: string; hint: string } {
+  // The beam could not be read: say what the report does without claiming a value.
+  if (savedLb === undefined) return { placeholder: "saved Lb, if any", hint: "Braces every Lb from the start of each span; empty: the beam's saved Lb, or at the supports only" };
+  if (savedLb === null) return { placeholder: "braced at supports only", hint: "Braces every Lb from the start of each span; empty: at the supports only" };
+  const saved = formatQuantity(savedLb, units, "length");
+  return {
+    placeholder: `saved: ${saved}`,
+    hint: `Braces every Lb from the start of each span; empty: the beam's saved Lb of ${saved} (clear it in the design settings to brace at the supports only)`,
+  };
+}
+
+/**
+ * The PDF report of one revision with the member checks of a project section, method and Lb of the
+ * user's choice; what the link leaves out (an empty Lb, Cb, cases, limits) the report takes from
+ * the beam's saved design settings.
+ */
 export function ChecksReportLink({ projectId, beamId, version, units }: { projectId: string; beamId: string; version: number; units: UnitSystemId }) {
   const sections = useSections(projectId);
+  const beam = useBeam(projectId, beamId);
   const [sectionId, setSectionId] = useState("");
   const [method, setMethod] = useState<Method>("LRFD");
   const [lbText, setLbText] = useState("");
-  if (!sections.isSuccess) return null;
+  // Wait for the beam too: until its settings are known, an empty Lb's meaning is not.
+  if (!sections.isSuccess || beam.isPending) return null;
   const list = sections.data;
   const chosen = list.find((s) => s.id === sectionId) ?? list[0];
   const lb = parseUnbracedLength(lbText, units);
+  const empty = emptyLbMeaning(beam.isSuccess ? (beam.data.designSettings?.lb ?? null) : undefined, units);
 
   return (
     <details className="w-full max-w-sm text-sm">
@@ -50,8 +75,8 @@ export function ChecksReportLink({ projectId, beamId, version, units }: { projec
             name="reportLb"
             inputMode="decimal"
             value={lbText}
-            placeholder="braced at supports only"
-            hint="Braces every Lb from the start of each span"
+            placeholder={empty.placeholder}
+            hint={empty.hint}
             error={lb.ok ? undefined : lb.message}
             onChange={(e) => setLbText(e.target.value)}
           />
