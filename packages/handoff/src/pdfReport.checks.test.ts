@@ -87,4 +87,12 @@ describe("renderCalculationReport with member checks", () => {
     const text = (await extractPdfText(await renderCalculationReport(base))).map(squash).join(" ");
     expect(text).not.toContain("Member checks");
   }, 30_000);
+
+  it("says why when checks were asked for but cannot be printed, without a table or code editions", async () => {
+    const why = "The project section I-300 demo chosen in the design settings has been deleted; no member checks are printed.";
+    const text = (await extractPdfText(await renderCalculationReport({ ...base, checksOmitted: why }))).map(squash).join(" ");
+    expect(text).toContain("Member checks");
+    expect(text).toContain(why);
+    expect(text).not.toContain("Code editions used");
+  }, 30_000);
 });

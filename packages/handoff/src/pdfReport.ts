@@ -43,6 +43,12 @@ export interface CalculationReportInput {
   checks?: readonly ReportCheckRow[];
   /** Which section and material the checks are for. */
   checksBasis?: string;
+  /**
+   * Why member checks that were asked for are missing (e.g. their section was deleted): printed
+   * under a "Member checks" heading when there are no check rows, so the report never drops them
+   * silently.
+   */
+  checksOmitted?: string;
   /** Code editions the checks cite; defaults to the design package's `CODE_EDITIONS`. */
   codeEditions?: readonly ReportCodeEdition[];
 }
@@ -181,6 +187,9 @@ export async function renderCalculationReport(input: CalculationReportInput): Pr
   drawDeflections(doc, input.model, input.result, u);
   if (input.checks && input.checks.length > 0) {
     drawMemberChecks(doc, { rows: input.checks, codeEditions: input.codeEditions ?? CODE_EDITIONS, caution: DESIGN_CAUTION, ...(input.checksBasis ? { basis: input.checksBasis } : {}) }, u);
+  } else if (input.checksOmitted) {
+    heading(doc, "Member checks");
+    paragraph(doc, input.checksOmitted);
   }
   drawDiagramPages(doc, input, sampled);
   drawFooters(doc, input);
