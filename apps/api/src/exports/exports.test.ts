@@ -191,6 +191,20 @@ describe("calculation report PDF with member checks", () => {
     expect(overridden).toContain("every Lb = 2.5 m");
   });
 
+  it("says which saved project section was deleted instead of printing no checks silently", async () => {
+    const { engineer, viewer, projectPath, revisions, beamPath } = await teamProject(t);
+    const { section } = (await engineer.client.post(`${projectPath}/sections`, { name: "I-300 withdrawn", shape: iShape, material: steel })).body;
+    const designSettings = { section: { source: "project", sectionId: section.id }, material: null, method: "LRFD", lb: null, cb: "equation-f1-1", strengthIds: null, deflection: null, allowableBending: null, allowableShear: null };
+    expect((await engineer.client.patch(`${beamPath}/design-settings`, { designSettings })).status).toBe(200);
+    expect((await engineer.client.delete(`${projectPath}/sections/${section.id}`)).status).toBe(204);
+    const res = await viewer.client.get(`${revisions}/1/report.pdf`).buffer(true).parse(binary);
+    expect(res.status).toBe(200);
+    const all = (await extractPdfText(res.body as Buffer)).join("\n").replace(/\s+/g, " ");
+    expect(all).toContain("Member checks");
+    expect(all).toContain('The project section "I-300 withdrawn" chosen in this beam\'s design settings has been deleted from the project, so no member checks are printed');
+    expect(all).not.toContain("Code editions used");
+  });
+
   it("refuses an lb that is not a positive number, naming the field", async () => {
     const { viewer, revisions } = await teamProject(t);
     for (const lb of ["0", "-2", "abc", "Infinity"]) {

@@ -6,7 +6,14 @@ import type { Db } from "../db/client.js";
 import type { RevisionContext } from "../revisions/revisionContext.js";
 import { findSection } from "../sections/sections.repo.js";
 import type { SectionsService } from "../sections/sections.service.js";
+import { findDeletedSectionName } from "./exports.repo.js";
 import { memberChecks, type CheckedSection, type DeflectionRuleChoice, type MemberChecks } from "./memberChecks.js";
+
+/**
+ * What the report prints under "Member checks": the checks; why there are none although the saved
+ * settings chose a section (`omitted`, one sentence); or nothing when no section was chosen.
+ */
+export type ReportChecks = { readonly checks: MemberChecks } | { readonly omitted: string } | null;
 
 function limitOf(limit: DesignDeflectionLimit): DeflectionLimit | null {
   if (limit.kind === "ratio") return { kind: "ratio", ratio: limit.ratio };
@@ -23,10 +30,17 @@ function deflectionRules(saved: BeamDesignSettings | null): DeflectionRuleChoice
   });
 }
 
+/** The sentence the report prints instead of checks whose saved project section was deleted. */
+async function deletedSectionSentence(db: Db, projectId: string, sectionId: string): Promise<string> {
+  const name = await findDeletedSectionName(db, projectId, sectionId);
+  const section = name === null ? `The project section ${sectionId}` : `The project section "${name}"`;
+  return `${section} chosen in this beam's design settings has been deleted from the project, so no member checks are printed; choose another section in the beam's design settings.`;
+}
+
 /**
  * The section the report checks: the query's project section (with its own material), else the
  * saved choice (a project section, with the saved material when one was chosen, or a typed
- * shape); null when there is none, or the saved project section has since been deleted.
+ * shape); null when there is none; `missing` when the saved project section has since been deleted.
  */
 async function checkedSection(
   db: Db,
@@ -35,7 +49,7 @@ async function checkedSection(
   projectId: string,
   saved: BeamDesignSettings | null,
   query: ReportQuery,
-): Promise<CheckedSection | null> {
+): Promise<CheckedSection | { missing: string } | null> {
   if (query.sectionId) return sections.get(userId, projectId, query.sectionId);
   const choice = saved?.section ?? null;
   if (choice === null) return null;
@@ -43,7 +57,7 @@ async function checkedSection(
   if (material && !material.ok) return null;
   if (choice.source === "project") {
     const section = await findSection(db, projectId, choice.sectionId);
-    if (!section) return null;
+    if (!section) return { missing: choice.sectionId };
     return material ? { ...section, material: material.value } : section;
   }
   const shape = validateSectionShape(choice.shape);
@@ -53,13 +67,14 @@ async function checkedSection(
 /**
  * The member checks printed in a revision's PDF report: the beam's saved design settings (method,
  * Lb, Cb, cases, deflection limits, allowables), each part replaced by the query's when given.
- * Undefined when neither names a section: the report then has no member checks.
+ * Null when neither names a section: the report then has no member checks.
  */
-export async function reportChecks(db: Db, sections: SectionsService, userId: string, ctx: RevisionContext, query: ReportQuery): Promise<MemberChecks | undefined> {
+export async function reportChecks(db: Db, sections: SectionsService, userId: string, ctx: RevisionContext, query: ReportQuery): Promise<ReportChecks> {
   const saved = readDesignSettings(await findDesignSettings(db, ctx.beam.id));
   const section = await checkedSection(db, sections, userId, ctx.beam.projectId, saved, query);
-  if (!section) return undefined;
-  return memberChecks(ctx.model, section, {
+  if (!section) return null;
+  if ("missing" in section) return { omitted: await deletedSectionSentence(db, ctx.beam.projectId, section.missing) };
+  const checks = memberChecks(ctx.model, section, {
     method: query.method ?? saved?.method ?? "LRFD",
     Lb: query.lb ?? saved?.lb ?? null,
     ...(query.cb ?? saved?.cb ? { cb: query.cb ?? saved!.cb } : {}),
@@ -68,4 +83,5 @@ export async function reportChecks(db: Db, sections: SectionsService, userId: st
     allowableBending: saved?.allowableBending ?? null,
     allowableShear: saved?.allowableShear ?? null,
   });
+  return { checks };
 }

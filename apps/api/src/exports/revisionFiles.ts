@@ -6,7 +6,7 @@ import {
   renderCalculationReport,
 } from "@spanwright/handoff";
 import type { RevisionContext } from "../revisions/revisionContext.js";
-import type { MemberChecks } from "./memberChecks.js";
+import type { ReportChecks } from "./reportChecks.js";
 
 export interface RevisionFile {
   filename: string;
@@ -29,9 +29,9 @@ export function revisionCsv(ctx: RevisionContext, units: CsvUnits): RevisionFile
 
 /**
  * The calculation report. Dated with the revision's time, so the same revision (and section) gives
- * the same bytes. With `checks`, it adds the member checks of a project section.
+ * the same bytes. With `report`, it adds the member checks of a section, or says why there are none.
  */
-export async function revisionPdf(ctx: RevisionContext, checks?: MemberChecks): Promise<RevisionFile> {
+export async function revisionPdf(ctx: RevisionContext, report: ReportChecks = null): Promise<RevisionFile> {
   const content = await renderCalculationReport({
     project: ctx.project.name,
     beam: ctx.beam.name,
@@ -42,7 +42,8 @@ export async function revisionPdf(ctx: RevisionContext, checks?: MemberChecks): 
     units: ctx.project.unitSystem,
     model: ctx.model,
     result: ctx.result,
-    ...(checks ? { checks: checks.rows, checksBasis: checks.basis } : {}),
+    ...(report && "checks" in report ? { checks: report.checks.rows, checksBasis: report.checks.basis } : {}),
+    ...(report && "omitted" in report ? { checksOmitted: report.omitted } : {}),
   });
   return {
     filename: exportFileName(ctx.beam.name, ctx.revision.version, "report.pdf"),
