@@ -1,3 +1,4 @@
+import { useState } from "react";
 import { afterEach, describe, expect, it, vi } from "vitest";
 import { fireEvent, screen, waitFor, within } from "@testing-library/react";
 import { analyze, beamModelSchema } from "@spanwright/solver";
@@ -168,6 +169,31 @@ describe("the editor's Checks tab on a saved beam", () => {
     expect(inDisabledFieldset("Unbraced length Lb (m)")).toBe(true);
     expect(screen.queryByRole("button", { name: "Save design settings" })).toBeNull();
     expect(screen.getByRole("link", { name: "PDF report with these checks" })).toBeTruthy();
+  });
+
+  it("keeps unsaved choices when a combination is added, and checks the new combination too", async () => {
+    vi.stubGlobal("fetch", stubFetch(answers("engineer", saved)));
+    const before = reloaded();
+    const r = fromExchange({ ...demo, combinations: [...demo.combinations, { id: "LRFD1", factors: { D: 1.4 } }] });
+    if (!r.ok) throw new Error(r.error.message);
+    const after = r.doc;
+    function Editing() {
+      const [doc, setDoc] = useState(before);
+      return (
+        <>
+          <button type="button" onClick={() => setDoc(after)}>Add LRFD1</button>
+          <EditorChecks doc={doc} analysis={analysisOf(doc)} />
+        </>
+      );
+    }
+    renderRoutes([{ path: "/projects/:projectId/beams/:beamId", element: <Editing /> }], `/projects/${projectId}/beams/${beamId}`);
+    fireEvent.change(await screen.findByLabelText("Unbraced length Lb (m)"), { target: { value: "3" } });
+    fireEvent.click(screen.getByRole("button", { name: "Add LRFD1" }));
+    expect((screen.getByLabelText("Unbraced length Lb (m)") as HTMLInputElement).value).toBe("3");
+    expect((screen.getByLabelText("Design method") as HTMLSelectElement).value).toBe("ASD");
+    // The saved strength cases are "every combination", so the new one is checked as well.
+    expect(within(screen.getByRole("table", { name: "Member checks" })).getAllByText("LRFD1").length).toBeGreaterThan(0);
+    expect(screen.getByText("Unsaved changes: the saved settings differ from what is shown.")).toBeTruthy();
   });
 
   it("says so when the saved project section was deleted and no segment has a section", async () => {
