@@ -174,7 +174,7 @@ describe("the editor's Checks tab on a saved beam", () => {
   it("keeps unsaved choices when a combination is added, and checks the new combination too", async () => {
     vi.stubGlobal("fetch", stubFetch(answers("engineer", saved)));
     const before = reloaded();
-    const r = fromExchange({ ...demo, combinations: [...demo.combinations, { id: "LRFD1", factors: { D: 1.4 } }] });
+    const r = fromExchange({ ...demo, combinations: [...(demo.combinations ?? []), { id: "LRFD1", factors: { D: 1.4 } }] });
     if (!r.ok) throw new Error(r.error.message);
     const after = r.doc;
     function Editing() {
