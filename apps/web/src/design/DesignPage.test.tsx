@@ -148,4 +148,26 @@ describe("DesignPage", () => {
     expect(screen.queryByRole("button", { name: "Save design settings" })).toBeNull();
     expect(screen.getByRole("link", { name: "PDF report with these checks" })).toBeTruthy();
   });
+
+  it("moves strength checks from the load cases to combinations generated on a beam that had none, and saves them as every combination", async () => {
+    const table = answers("engineer", { ...saved, deflection: null });
+    const key = `GET /api/projects/${projectId}/beams/${beamId}`;
+    const beam = table[key].body as { revision: { model: typeof model } };
+    const bare = { ...beam, revision: { ...beam.revision, model: { ...model, combinations: [] } } };
+    const { fetch, sent } = echoingFetch({ ...table, [key]: { status: 200, body: bare } });
+    vi.stubGlobal("fetch", fetch);
+    page();
+    await screen.findByText("Design checks: B-12");
+    const caseColumn = () => within(screen.getByRole("table", { name: "Member checks" })).getAllByRole("row").slice(1).map((r) => r.querySelectorAll("td")[1]?.textContent);
+    // No combinations yet: strength checks on D and L (flexure and shear), deflection under L.
+    expect(new Set(caseColumn())).toEqual(new Set(["D", "L"]));
+    fireEvent.click(screen.getByRole("button", { name: /Apply 2 combinations/ }));
+    // ASCE/SEI 7-22 §2.3.1 with D and L only: combination 1 (1.4D) and 2 (1.2D + 1.6L)
+    await waitFor(() => expect(new Set(caseColumn())).toEqual(new Set(["LRFD1", "LRFD2", "L"])));
+    expect((screen.getByLabelText("Design method") as HTMLSelectElement).value).toBe("ASD");
+    expect((screen.getByLabelText("Unbraced length Lb (m)") as HTMLInputElement).value).toBe("2");
+    fireEvent.click(screen.getByRole("button", { name: "Save design settings" }));
+    await waitFor(() => expect(sent).toHaveLength(1));
+    expect((sent[0] as { designSettings: { strengthIds: unknown } }).designSettings.strengthIds).toBeNull();
+  });
 });

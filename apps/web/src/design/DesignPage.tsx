@@ -16,7 +16,7 @@ import { Alert } from "../components/Alert";
 import { Card, PageHeader } from "../components/PageHeader";
 import { Loading, QueryError } from "../components/QueryState";
 import type { UnitSystemId } from "../editor/units/unitSystems";
-import { choicesFromSettings, settingsOf, type CheckChoices } from "./checkChoices";
+import { carryChoices, choicesFromSettings, settingsOf } from "./checkChoices";
 import { ChecksPanel } from "./ChecksPanel";
 import { CombinationGenerator } from "./CombinationGenerator";
 import { DesignSettingsBar } from "./DesignSettingsBar";
@@ -88,7 +88,8 @@ function DesignWorkspace({ ids, model, result, units, saved, sections, canEdit }
   const [material, setMaterial] = useState<Material>(start.material);
   const [pickerKey, setPickerKey] = useState(0);
   const [added, setAdded] = useState<readonly GeneratedCombination[]>([]);
-  const [choices, setChoices] = useState<CheckChoices>(() => choicesFromSettings(saved, model));
+  // The choices and the model they were made on: generated combinations restart the checks, which carry them over.
+  const [made, setMade] = useState(() => ({ choices: choicesFromSettings(saved, model), model }));
   const save = useSaveDesignSettings(ids.projectId, ids.beamId);
   const theory = model.theory ?? "euler-bernoulli";
 
@@ -115,6 +116,7 @@ function DesignWorkspace({ ids, model, result, units, saved, sections, canEdit }
     // Editing a project section's dimensions checks a new shape typed here; the library entry stays as it is.
     if (source.kind === "project") setSource({ kind: "typed", name: `${sections.find((s) => s.id === source.sectionId)?.name ?? "Section"} (edited)` });
   };
+  const choices = carryChoices(made.choices, made.model, designModel);
   const draft = settingsOf(sectionChoiceOf(source, shape), materialToSave(source, material, sections), choices, designModel);
 
   return (
@@ -146,7 +148,7 @@ function DesignWorkspace({ ids, model, result, units, saved, sections, canEdit }
           material={material}
           solveModel={solve}
           initial={choices}
-          onChoicesChange={setChoices}
+          onChoicesChange={(next) => setMade({ choices: next, model: designModel })}
           readOnly={!canEdit}
           footer={
             <DesignSettingsBar

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import type { BeamDesignSettings } from "@spanwright/contracts";
 import { findMaterialPreset } from "@spanwright/solver/design";
-import { choicesFromSettings, defaultChoices, sameSettings, sameValue, settingsOf } from "./checkChoices";
+import { carryChoices, choicesFromSettings, defaultChoices, sameSettings, sameValue, settingsOf } from "./checkChoices";
 import type { DesignModel } from "./designModel";
 
 /** Invented demo beam: one simple span with dead and live cases and one combination. */
@@ -43,5 +43,33 @@ describe("check choices and saved design settings", () => {
     expect(sameValue({ lb: 3.048, a: 1 }, { a: 1, lb: 3.0480000000000005 })).toBe(true);
     expect(sameValue({ lb: 3.048 }, { lb: 3.049 })).toBe(false);
     expect(sameSettings(null, undefined)).toBe(true);
+  });
+});
+
+describe("carryChoices", () => {
+  /** The demo beam before any combination: strength checks default to its load cases. */
+  const bare: DesignModel = { ...model, combinations: [] };
+  const generated: DesignModel = { ...model, combinations: [{ id: "LRFD1", factors: { D: 1.4 } }, { id: "LRFD2", factors: { D: 1.2, L: 1.6 } }] };
+
+  it("moves default strength checks from the load cases to combinations generated afterwards, keeping the rest", () => {
+    const before = { ...defaultChoices(bare), method: "ASD" as const, lb: 2 };
+    expect(before.strengthIds).toEqual(["D", "L"]);
+    const after = carryChoices(before, bare, generated);
+    expect(after.strengthIds).toEqual(["LRFD1", "LRFD2"]);
+    expect(after).toMatchObject({ method: "ASD", lb: 2, cb: "equation-f1-1" });
+    // and saved as null ("every combination"), so the report follows the beam's combinations
+    expect(settingsOf(typed, steel, after, generated)).toMatchObject({ ok: true, settings: { strengthIds: null } });
+  });
+
+  it("keeps a chosen list, dropping ids the model no longer has, here and in the deflection rules", () => {
+    const before = { ...defaultChoices(model), strengthIds: ["C1", "D"], rules: [{ key: 1, choice: "floor-total", ratioText: "240", ids: ["C1", "L"] }] };
+    const after = carryChoices(before, model, { ...model, combinations: [{ id: "C2", factors: { D: 1.4 } }] });
+    expect(after.strengthIds).toEqual(["D"]);
+    expect(after.rules.map((r) => r.ids)).toEqual([["L"]]);
+  });
+
+  it("leaves choices unchanged when the model did not change", () => {
+    const c = defaultChoices(model);
+    expect(carryChoices(c, model, model)).toEqual(c);
   });
 });

@@ -63,6 +63,22 @@ export function choicesFromSettings(settings: BeamDesignSettings | null | undefi
   };
 }
 
+/**
+ * Choices carried over when the checks start again on changed cases or combinations (the editor's
+ * table, or combinations generated on the design page): ids the model no longer has are dropped,
+ * and the default (every combination, or the load cases when there were none) stays the default,
+ * so new combinations join the strength checks.
+ */
+export function carryChoices(choices: CheckChoices, before: DesignModel, now: DesignModel): CheckChoices {
+  const known = new Set([...caseIds(now), ...combinationIds(now)]);
+  const wasDefault = sameValue([...choices.strengthIds].sort(), defaultStrengthIds(before).sort());
+  return {
+    ...choices,
+    strengthIds: wasDefault ? defaultStrengthIds(now) : choices.strengthIds.filter((id) => known.has(id)),
+    rules: choices.rules.map((r) => ({ ...r, ids: r.ids.filter((id) => known.has(id)) })),
+  };
+}
+
 /** A saved rule, or null while its typed ratio is not a number greater than zero. */
 function savedRule(rule: DeflectionRule): DesignDeflectionRule | null {
   if (rule.choice !== TYPED_LIMIT) return { limit: { kind: "preset", presetId: rule.choice }, ids: [...rule.ids] };

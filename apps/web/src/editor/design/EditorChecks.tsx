@@ -7,8 +7,8 @@ import { useBeam } from "../../api/beams";
 import { useProject } from "../../api/projects";
 import { useSections } from "../../api/sections";
 import { ChecksPanel, stationsForChecks } from "../../design";
-import { choicesFromSettings, defaultStrengthIds, sameValue, settingsOf, type CheckChoices } from "../../design/checkChoices";
-import { caseIds, combinationIds, type DesignModel } from "../../design/designModel";
+import { carryChoices, choicesFromSettings, sameValue, settingsOf } from "../../design/checkChoices";
+import type { DesignModel } from "../../design/designModel";
 import { DesignSettingsBar } from "../../design/DesignSettingsBar";
 import { reportPdfUrl, useSaveDesignSettings } from "../../design/designSettingsApi";
 import { materialToSave, sectionChoiceOf, startingSection, type SectionSource } from "../../design/SectionSourcePicker";
@@ -161,20 +161,6 @@ function checkedSection(doc: BeamDocument, segmentId: SegmentId | null, saved: B
   const { source, shape, material } = savedSection;
   const name = source.kind === "typed" ? source.name : (sections.find((s) => s.id === source.sectionId)?.name ?? "");
   return { shape, material, source, note: `Checking the section saved with the beam, ${name}: ${material.name} (no segment has a section in this session).` };
-}
-
-/**
- * Choices carried over when the panel starts again on changed cases or combinations: ids the
- * model no longer has are dropped, and the default (every combination) stays the default.
- */
-function carryChoices(choices: CheckChoices, before: DesignModel, now: DesignModel): CheckChoices {
-  const known = new Set([...caseIds(now), ...combinationIds(now)]);
-  const wasDefault = sameValue([...choices.strengthIds].sort(), defaultStrengthIds(before).sort());
-  return {
-    ...choices,
-    strengthIds: wasDefault ? defaultStrengthIds(now) : choices.strengthIds.filter((id) => known.has(id)),
-    rules: choices.rules.map((r) => ({ ...r, ids: r.ids.filter((id) => known.has(id)) })),
-  };
 }
 
 function ChecksBody({ note, children }: { note: string; children: ReactNode }) {
