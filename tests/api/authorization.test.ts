@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { apiRoutes, can, routePath, type Role, type RouteName } from "@spanwright/contracts";
-import { createTestApp, testPassword, twoSpanModel, uniqueEmail, type Client, type TestApp } from "@spanwright/api/testing";
+import { createTestApp, testPassword, twoSpanModel, uniqueEmail, verificationToken, type Client, type TestApp } from "@spanwright/api/testing";
 import { listExpressRoutes } from "./routeTable.js";
 
 /**
@@ -40,6 +40,8 @@ const calls: Record<RouteName, (f: Fixture) => Call> = {
   signUp: () => ({ params: {}, body: { email: uniqueEmail("matrix"), name: "Matrix", password: testPassword } }),
   signIn: () => ({ params: {}, body: { email: emails.extra, password: testPassword } }),
   signOut: () => ({ params: {}, body: {} }),
+  verifyEmail: () => ({ params: {}, body: { token: verificationTokens.pop() } }),
+  resendVerification: () => ({ params: {}, body: {} }),
   me: () => ({ params: {} }),
   changePassword: () => ({ params: {}, body: { currentPassword: testPassword, newPassword: testPassword } }),
   solve: () => ({ params: {}, body: twoSpanModel() }),
@@ -104,6 +106,8 @@ const expectedAccess: Record<RouteName, "public" | "signed-in" | "owner-of-any-p
   signUp: "public",
   signIn: "public",
   signOut: "public",
+  verifyEmail: "public",
+  resendVerification: "signed-in",
   me: "signed-in",
   changePassword: "signed-in",
   solve: "signed-in",
@@ -180,6 +184,8 @@ async function createFixture(): Promise<Fixture> {
 }
 
 const emails = {} as Record<Exclude<Actor, "anonymous"> | "extra", string>;
+/** Unused e-mail verification tokens of accounts that took over an invitation, one per verifyEmail call. */
+const verificationTokens: string[] = [];
 
 beforeAll(async () => {
   t = await createTestApp();
@@ -195,6 +201,11 @@ beforeAll(async () => {
   const section = await t.services.sections.create(ids.outsider, other.id, { name: "Foreign", shape: sectionShape, material: sectionMaterial });
   foreign = { projectId: other.id, beamId: beam.id, sectionId: section.id, extraUserId: ids.outsider };
   shared = await createFixture();
+  // an invited address signed up: the public verifyEmail case follows its mailed link
+  const invited = uniqueEmail("matrix.invited");
+  await t.services.members.invite(ids.owner, shared.projectId, { email: invited, role: "viewer" });
+  await t.signUp("Matrix invited", invited);
+  verificationTokens.push(await verificationToken(t.services.mailer, invited));
 });
 afterAll(() => t.close());
 

@@ -8,6 +8,7 @@ import { pinoHttp } from "pino-http";
 import { apiLimits } from "@spanwright/contracts";
 import { registerAuthRoutes } from "./auth/auth.routes.js";
 import { createAuthService } from "./auth/auth.service.js";
+import { createEmailVerificationService } from "./auth/emailVerification.js";
 import { loadSession } from "./auth/sessionCookie.js";
 import { registerBeamRoutes } from "./beams/beams.routes.js";
 import { registerSectionRoutes } from "./sections/sections.routes.js";
@@ -52,11 +53,13 @@ export interface AppDeps {
 export function createServices(deps: { database: Database; engine: Engine; clock: Clock; mailer: Mailer; publicUrl: string; logger?: Logger }) {
   const { database, engine, clock, mailer } = deps;
   const db = database.db;
-  const auth = createAuthService({ db, clock });
+  const emailVerification = createEmailVerificationService({ db, clock, mailer, publicUrl: deps.publicUrl, ...(deps.logger ? { logger: deps.logger } : {}) });
+  const auth = createAuthService({ db, clock, emailVerification });
   const beams = createBeamsService({ db, clock, engine });
   const revisions = createRevisionsService({ db, clock, engine, beams });
   return {
     auth,
+    emailVerification,
     projects: createProjectsService({ db, clock }),
     members: createMembersService({ db }),
     beams,
@@ -89,6 +92,7 @@ function createApiRouter(deps: AppDeps, services: Services): Router {
   router.use("/api", loadSession(services.auth, config.sessionCookieName));
   registerAuthRoutes(router, {
     auth: services.auth,
+    emailVerification: services.emailVerification,
     cookieName: config.sessionCookieName,
     authRateLimit: authRateLimiter(config),
   });

@@ -35,6 +35,8 @@ async function sweepSessions(): Promise<void> {
   try {
     const deleted = await services.auth.sweepExpiredSessions();
     if (deleted > 0) logger.info({ deleted }, "expired sessions deleted");
+    const links = await services.emailVerification.sweepExpired();
+    if (links > 0) logger.info({ deleted: links }, "expired e-mail verification links deleted");
   } catch (error) {
     logger.warn({ err: error }, "sweeping expired sessions failed; will try again");
   }

@@ -9,6 +9,12 @@ export const userSchema = z.object({
   id: userIdSchema,
   email: z.string(),
   name: z.string(),
+  /**
+   * False only for an account that took over an invitation's placeholder and has not yet followed
+   * the link mailed to its address: until then the projects it was invited to stay closed (404).
+   * The API always sends it; optional so a user object without it still parses.
+   */
+  emailVerified: z.boolean().optional(),
 });
 export type User = z.infer<typeof userSchema>;
 
@@ -30,6 +36,16 @@ export const changePasswordRequestSchema = z.object({
   newPassword: passwordSchema,
 });
 export type ChangePasswordRequest = z.infer<typeof changePasswordRequestSchema>;
+
+/** `POST /api/auth/verify-email`: the token from the link in the verification e-mail. */
+export const verifyEmailRequestSchema = z.object({
+  token: z.string().min(1).max(200),
+});
+export type VerifyEmailRequest = z.infer<typeof verifyEmailRequestSchema>;
+
+/** Answer of `POST /api/auth/verify-email` (200): the e-mail that is now verified. */
+export const verifyEmailResponseSchema = z.object({ email: z.string() });
+export type VerifyEmailResponse = z.infer<typeof verifyEmailResponseSchema>;
 
 /** Answer of sign-up (201), sign-in (200) and `GET /api/me` (200). */
 export const meResponseSchema = z.object({ user: userSchema });

@@ -14,7 +14,9 @@ export const errorCodes = [
   "version-conflict", // 409: baseVersion is not the latest; details.current is the latest revision
   "already-checked", // 409: a checked revision is immutable
   "name-taken", // 409: a project section with this name exists; details.name
+  "verification-token-invalid", // 400: an e-mail verification token that is unknown or already used
   "file-too-large", // 413: an upload over uploadLimits.fileBytes (nothing is written)
+  "verification-token-expired", // 422: an e-mail verification link past its expiry; ask for a new one
   "invalid-file", // 422: an upload that is not what the route takes (not JSON, not CSV, no file)
   "invalid-schedule", // 422: a load schedule with row errors; details.errors lists them
   "invalid-recipient", // 422: a hand-off recipient who is not a viewer member; details.recipient
@@ -44,7 +46,9 @@ export const errorStatus: Record<ErrorCode, number> = {
   "version-conflict": 409,
   "already-checked": 409,
   "name-taken": 409,
+  "verification-token-invalid": 400,
   "file-too-large": 413,
+  "verification-token-expired": 422,
   "invalid-file": 422,
   "invalid-schedule": 422,
   "invalid-recipient": 422,

@@ -49,7 +49,7 @@ export const memberSchema = z.object({
   email: z.string(),
   name: z.string(),
   role: roleSchema,
-  /** true until the invited e-mail signs up (the account is a placeholder until then). */
+  /** true until the invited e-mail signs up and proves the address (follows the mailed link). */
   pending: z.boolean(),
   addedAt: z.string(),
 });

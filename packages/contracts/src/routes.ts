@@ -27,6 +27,10 @@ export const apiRoutes = {
   signUp: { method: "POST", path: "/api/auth/sign-up", access: "public", status: 201 },
   signIn: { method: "POST", path: "/api/auth/sign-in", access: "public", status: 200 },
   signOut: { method: "POST", path: "/api/auth/sign-out", access: "public", status: 204 },
+  /** Follows the link of the verification e-mail (body `{ token }`): the invitations of the account open. */
+  verifyEmail: { method: "POST", path: "/api/auth/verify-email", access: "public", status: 200 },
+  /** Mails the signed-in user a new verification link (204; nothing is sent when already verified). */
+  resendVerification: { method: "POST", path: "/api/auth/verify-email/resend", access: "signed-in", status: 204 },
   me: { method: "GET", path: "/api/me", access: "signed-in", status: 200 },
   changePassword: { method: "POST", path: "/api/me/password", access: "signed-in", status: 204 },
   solve: { method: "POST", path: "/api/solve", access: "signed-in", status: 200 },

@@ -5,6 +5,7 @@ import { auditEvents } from "../db/schema.js";
 export type AuditAction =
   | "user.signed-up"
   | "user.password-changed"
+  | "user.email-verified"
   | "project.created"
   | "project.updated"
   | "project.deleted"

@@ -9,6 +9,8 @@ export interface UserRecord {
   name: string;
   /** null for a placeholder created by an invitation. */
   passwordHash: string | null;
+  /** null for a placeholder, and for an account that took one over until it verifies its address. */
+  emailVerifiedAt: Date | null;
 }
 
 export interface SessionRecord {
@@ -17,7 +19,13 @@ export interface SessionRecord {
   expiresAt: Date;
 }
 
-const userColumns = { id: users.id, email: users.email, name: users.name, passwordHash: users.passwordHash };
+const userColumns = {
+  id: users.id,
+  email: users.email,
+  name: users.name,
+  passwordHash: users.passwordHash,
+  emailVerifiedAt: users.emailVerifiedAt,
+};
 
 export async function findUserByEmail(db: Db, email: string): Promise<UserRecord | null> {
   const [row] = await db.select(userColumns).from(users).where(eq(users.email, email));
@@ -31,14 +39,17 @@ export async function findUserById(db: Db, id: string): Promise<UserRecord | nul
 
 export async function insertUser(
   db: Db,
-  values: { email: string; name: string; passwordHash: string | null },
+  values: { email: string; name: string; passwordHash: string | null; emailVerifiedAt?: Date },
 ): Promise<UserRecord> {
   const [row] = await db.insert(users).values(values).returning(userColumns);
   if (!row) throw new Error("insert users returned no row");
   return row;
 }
 
-/** Gives a placeholder account its owner's name and password; null if someone claimed it first. */
+/**
+ * Gives a placeholder account its owner's name and password; null if someone claimed it first. The
+ * address stays unverified: signing up proves nothing about who reads its mail.
+ */
 export async function claimPlaceholderUser(
   db: Db,
   id: string,

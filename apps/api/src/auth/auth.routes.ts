@@ -3,18 +3,21 @@ import {
   changePasswordRequestSchema,
   signInRequestSchema,
   signUpRequestSchema,
+  verifyEmailRequestSchema,
   type MeResponse,
+  type VerifyEmailResponse,
 } from "@spanwright/contracts";
 import type { RequestHandler, Router } from "express";
 import { parseRequest } from "../http/validate.js";
 import type { AuthService } from "./auth.service.js";
+import type { EmailVerificationService } from "./emailVerification.js";
 import { clearSessionCookie, readSessionToken, requireAuth, setSessionCookie } from "./sessionCookie.js";
 
 export function registerAuthRoutes(
   router: Router,
-  deps: { auth: AuthService; cookieName: string; authRateLimit: RequestHandler },
+  deps: { auth: AuthService; emailVerification: EmailVerificationService; cookieName: string; authRateLimit: RequestHandler },
 ): void {
-  const { auth, cookieName, authRateLimit } = deps;
+  const { auth, emailVerification, cookieName, authRateLimit } = deps;
 
   router.post(apiRoutes.signUp.path, authRateLimit, async (req, res) => {
     const body = parseRequest(signUpRequestSchema, req.body);
@@ -34,6 +37,18 @@ export function registerAuthRoutes(
     const token = readSessionToken(req, cookieName);
     if (token) await auth.signOut(token);
     clearSessionCookie(req, res, cookieName);
+    res.status(204).end();
+  });
+
+  // public: the token is the proof, so the link also works in a browser that is not signed in
+  router.post(apiRoutes.verifyEmail.path, authRateLimit, async (req, res) => {
+    const { token } = parseRequest(verifyEmailRequestSchema, req.body);
+    res.json((await emailVerification.verify(token)) satisfies VerifyEmailResponse);
+  });
+
+  router.post(apiRoutes.resendVerification.path, authRateLimit, async (_req, res) => {
+    const { user } = requireAuth(res);
+    await emailVerification.resend(user);
     res.status(204).end();
   });
 

@@ -6,6 +6,7 @@ import { AppError } from "../http/appError.js";
 import { isUniqueViolation } from "../http/dbErrors.js";
 import * as repo from "./auth.repo.js";
 import { burnPasswordCheck, hashPassword, verifyPassword } from "./password.js";
+import type { EmailVerificationService } from "./emailVerification.js";
 import { generateSessionToken, sessionExpiry, sessionIdFromToken, sessionState } from "./sessionToken.js";
 
 export interface IssuedSession {
@@ -22,10 +23,10 @@ export interface Authenticated {
   renewedUntil: Date | null;
 }
 
-const toUser = (u: repo.UserRecord): User => ({ id: u.id, email: u.email, name: u.name });
+const toUser = (u: repo.UserRecord): User => ({ id: u.id, email: u.email, name: u.name, emailVerified: u.emailVerifiedAt !== null });
 
-export function createAuthService(deps: { db: Db; clock: Clock }) {
-  const { db, clock } = deps;
+export function createAuthService(deps: { db: Db; clock: Clock; emailVerification: EmailVerificationService }) {
+  const { db, clock, emailVerification } = deps;
 
   async function issueSession(userId: string, tx: Db = db): Promise<IssuedSession> {
     const token = generateSessionToken();
@@ -33,6 +34,31 @@ export function createAuthService(deps: { db: Db; clock: Clock }) {
     const expiresAt = sessionExpiry(clock.now());
     await repo.insertSession(tx, { id: sessionId, userId, expiresAt });
     return { token, sessionId, expiresAt };
+  }
+
+  /** The new account, or the placeholder of this e-mail completed; 409 `email-taken` otherwise. */
+  async function createOrClaim(input: SignUpRequest, passwordHash: string): Promise<{ user: User; session: IssuedSession }> {
+    try {
+      return await inTransaction(db, async (tx) => {
+        const existing = await repo.findUserByEmail(tx, input.email);
+        let user: repo.UserRecord | null;
+        if (existing) {
+          user = existing.passwordHash === null
+            ? await repo.claimPlaceholderUser(tx, existing.id, { name: input.name, passwordHash })
+            : null;
+          if (!user) throw new AppError("email-taken", "an account with this e-mail already exists");
+        } else {
+          user = await repo.insertUser(tx, { email: input.email, name: input.name, passwordHash, emailVerifiedAt: clock.now() });
+        }
+        await recordAudit(tx, { projectId: null, actorId: user.id, action: "user.signed-up" });
+        return { user: toUser(user), session: await issueSession(user.id, tx) };
+      });
+    } catch (error) {
+      if (isUniqueViolation(error, "users_email_key")) {
+        throw new AppError("email-taken", "an account with this e-mail already exists");
+      }
+      throw error;
+    }
   }
 
   return {
@@ -47,30 +73,16 @@ export function createAuthService(deps: { db: Db; clock: Clock }) {
       return repo.deleteExpiredSessions(db, clock.now());
     },
 
-    /** Creates the account, or completes a placeholder an invitation created for this e-mail. */
+    /**
+     * Creates the account, or completes a placeholder an invitation created for this e-mail. A new
+     * address is verified at once (it opens nothing); a completed placeholder is signed in but its
+     * invitations stay closed until the link mailed to the address is followed.
+     */
     async signUp(input: SignUpRequest): Promise<{ user: User; session: IssuedSession }> {
       const passwordHash = await hashPassword(input.password);
-      try {
-        return await inTransaction(db, async (tx) => {
-          const existing = await repo.findUserByEmail(tx, input.email);
-          let user: repo.UserRecord | null;
-          if (existing) {
-            user = existing.passwordHash === null
-              ? await repo.claimPlaceholderUser(tx, existing.id, { name: input.name, passwordHash })
-              : null;
-            if (!user) throw new AppError("email-taken", "an account with this e-mail already exists");
-          } else {
-            user = await repo.insertUser(tx, { email: input.email, name: input.name, passwordHash });
-          }
-          await recordAudit(tx, { projectId: null, actorId: user.id, action: "user.signed-up" });
-          return { user: toUser(user), session: await issueSession(user.id, tx) };
-        });
-      } catch (error) {
-        if (isUniqueViolation(error, "users_email_key")) {
-          throw new AppError("email-taken", "an account with this e-mail already exists");
-        }
-        throw error;
-      }
+      const created = await createOrClaim(input, passwordHash);
+      if (!created.user.emailVerified) await emailVerification.sendFirstLink(created.user);
+      return created;
     },
 
     /** Checks the password and starts a new session; the presented one (if any) is ended (rotation). */

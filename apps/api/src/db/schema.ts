@@ -1,5 +1,6 @@
 import { sql } from "drizzle-orm";
 import {
+  boolean,
   check,
   index,
   integer,
@@ -24,6 +25,12 @@ export const users = pgTable(
     name: text("name").notNull(),
     /** argon2id PHC string; null for a placeholder created by an invitation, until sign-up. */
     passwordHash: text("password_hash"),
+    /**
+     * When the owner of the address proved it (followed the mailed link), or when the account was
+     * created by signing up with a new address (nothing to protect). Null for a placeholder and for
+     * an account that took one over until it verifies: its invitations stay closed until then.
+     */
+    emailVerifiedAt: timestamp("email_verified_at", { withTimezone: true }),
     createdAt: createdAt(),
   },
   (t) => [
@@ -76,6 +83,11 @@ export const projectMembers = pgTable(
       .notNull()
       .references(() => users.id, { onDelete: "cascade" }),
     role: text("role", { enum: ["owner", "engineer", "checker", "viewer"] }).notNull(),
+    /**
+     * Added by an owner's invitation of an e-mail address: counts only once the user's address is
+     * verified (`users.email_verified_at`). False for the project's creator, who needs no proof.
+     */
+    invited: boolean("invited").notNull().default(true),
     createdAt: createdAt(),
   },
   (t) => [
@@ -245,4 +257,22 @@ export const projectSections = pgTable(
     uniqueIndex("project_sections_project_name_key").on(t.projectId, t.name),
     check("project_sections_name_check", sql`length(${t.name}) between 1 and 120`),
   ],
+);
+
+/**
+ * One-time links that prove a user owns their e-mail address. `id` is the hex SHA-256 of the token
+ * in the link, never the token (as for sessions); `email` is the address the link was sent to.
+ */
+export const emailVerifications = pgTable(
+  "email_verifications",
+  {
+    id: text("id").primaryKey(),
+    userId: uuid("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    email: text("email").notNull(),
+    expiresAt: timestamp("expires_at", { withTimezone: true }).notNull(),
+    createdAt: createdAt(),
+  },
+  (t) => [index("email_verifications_user_id_idx").on(t.userId)],
 );

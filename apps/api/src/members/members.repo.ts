@@ -8,15 +8,17 @@ const columns = {
   email: users.email,
   name: users.name,
   role: projectMembers.role,
-  passwordHash: users.passwordHash,
+  emailVerifiedAt: users.emailVerifiedAt,
+  invited: projectMembers.invited,
   addedAt: projectMembers.createdAt,
 };
 
-type Row = { userId: string; email: string; name: string; role: Role; passwordHash: string | null; addedAt: Date };
+type Row = { userId: string; email: string; name: string; role: Role; emailVerifiedAt: Date | null; invited: boolean; addedAt: Date };
 
-const toMember = ({ passwordHash, addedAt, ...rest }: Row): Member => ({
+// Pending: invited, and the address not yet proved (no account yet, or one that has not verified).
+const toMember = ({ emailVerifiedAt, invited, addedAt, ...rest }: Row): Member => ({
   ...rest,
-  pending: passwordHash === null,
+  pending: invited && emailVerifiedAt === null,
   addedAt: addedAt.toISOString(),
 });
 

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { listMembers } from "./members.repo.js";
-import { createTestApp, testPassword, uniqueEmail, type TestApp } from "../testing/index.js";
+import { createTestApp, testPassword, uniqueEmail, verificationToken, type TestApp } from "../testing/index.js";
 
 let t: TestApp;
 beforeAll(async () => {
@@ -28,7 +28,7 @@ describe("members", () => {
     expect(again.body.error.code).toBe("already-member");
   });
 
-  it("invites an e-mail without an account as a pending member who joins on sign-up", async () => {
+  it("invites an e-mail without an account as a pending member who joins on sign-up and verifying the address", async () => {
     const { owner, projectId, base } = await projectWithOwner();
     const email = uniqueEmail("newcomer");
     const invited = await owner.client.post(base, { email, role: "checker" });
@@ -38,6 +38,9 @@ describe("members", () => {
 
     const joined = await t.signUp("Newcomer", email);
     expect(joined.userId).toBe(invited.body.member.userId);
+    expect((await joined.client.get("/api/projects")).body.projects).toEqual([]);
+    const token = await verificationToken(t.services.mailer, email);
+    expect((await t.client().post("/api/auth/verify-email", { token })).status).toBe(200);
     const projects = (await joined.client.get("/api/projects")).body.projects;
     expect(projects).toEqual([expect.objectContaining({ id: projectId, role: "checker" })]);
     const members = (await owner.client.get(base)).body.members;

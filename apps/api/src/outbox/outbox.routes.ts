@@ -1,9 +1,10 @@
 import { apiRoutes, type OutboxMessage, type OutboxResponse } from "@spanwright/contracts";
 import type { Router } from "express";
-import { eq } from "drizzle-orm";
+import { and, eq } from "drizzle-orm";
+import { membershipCounts } from "../access/access.repo.js";
 import { requireAuth } from "../auth/sessionCookie.js";
 import type { Db } from "../db/client.js";
-import { projectMembers } from "../db/schema.js";
+import { projectMembers, users } from "../db/schema.js";
 import { AppError } from "../http/appError.js";
 import type { Mailer } from "../mail/mailer.js";
 
@@ -11,7 +12,8 @@ async function ownsAnyProject(db: Db, userId: string): Promise<boolean> {
   const rows = await db
     .select({ role: projectMembers.role })
     .from(projectMembers)
-    .where(eq(projectMembers.userId, userId));
+    .innerJoin(users, eq(users.id, projectMembers.userId))
+    .where(and(eq(projectMembers.userId, userId), membershipCounts));
   return rows.some((r) => r.role === "owner");
 }
 

@@ -1,7 +1,8 @@
 import { and, asc, eq } from "drizzle-orm";
 import type { Project, Role, UnitSystem } from "@spanwright/contracts";
 import type { Db } from "../db/client.js";
-import { projectMembers, projects } from "../db/schema.js";
+import { membershipCounts } from "../access/access.repo.js";
+import { projectMembers, projects, users } from "../db/schema.js";
 
 export interface ProjectSettings {
   name: string;
@@ -32,7 +33,8 @@ export async function listProjectsForUser(db: Db, userId: string): Promise<Proje
     .select({ ...columns, role: projectMembers.role })
     .from(projects)
     .innerJoin(projectMembers, eq(projectMembers.projectId, projects.id))
-    .where(eq(projectMembers.userId, userId))
+    .innerJoin(users, eq(users.id, projectMembers.userId))
+    .where(and(eq(projectMembers.userId, userId), membershipCounts))
     .orderBy(asc(projects.name), asc(projects.id));
   return rows.map(({ role, ...row }) => toProject(row, role));
 }
@@ -42,17 +44,18 @@ export async function findProjectForMember(db: Db, projectId: string, userId: st
     .select({ ...columns, role: projectMembers.role })
     .from(projects)
     .innerJoin(projectMembers, eq(projectMembers.projectId, projects.id))
-    .where(and(eq(projects.id, projectId), eq(projectMembers.userId, userId)));
+    .innerJoin(users, eq(users.id, projectMembers.userId))
+    .where(and(eq(projects.id, projectId), eq(projectMembers.userId, userId), membershipCounts));
   if (!row) return null;
   const { role, ...rest } = row;
   return toProject(rest, role);
 }
 
-/** Creates the project with its creator as owner. */
+/** Creates the project with its creator as owner (not invited: the creator's membership always counts). */
 export async function insertProject(db: Db, settings: ProjectSettings, ownerId: string): Promise<Project> {
   const [row] = await db.insert(projects).values(settings).returning(columns);
   if (!row) throw new Error("insert projects returned no row");
-  await db.insert(projectMembers).values({ projectId: row.id, userId: ownerId, role: "owner" });
+  await db.insert(projectMembers).values({ projectId: row.id, userId: ownerId, role: "owner", invited: false });
   return toProject(row, "owner");
 }
 

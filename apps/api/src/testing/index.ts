@@ -2,3 +2,4 @@ export { Client, testOrigin } from "./client.js";
 export { createTestApp, testConfig, testPassword, uniqueEmail, type TestApp } from "./testApp.js";
 export { createTestDatabase, adminUrl, databaseUrl } from "./testDatabase.js";
 export { invalidModel, mechanismModel, twoSpanModel } from "./models.js";
+export { findVerificationLink, verificationToken } from "./verificationMail.js";
