@@ -20,7 +20,7 @@ describe("startEarly", () => {
       urls.push(input);
       return new Promise<Response>(() => {});
     });
-    const starts = { loadEditor: vi.fn(), startWorker: vi.fn() };
+    const starts = { loadEditor: vi.fn(), startWorker: vi.fn(), presolve: vi.fn() };
     startEarly("/sign-in", starts);
     expect(urls).toEqual(["/api/me"]);
     expect(starts.loadEditor).not.toHaveBeenCalled();
@@ -29,5 +29,17 @@ describe("startEarly", () => {
     expect(urls.sort()).toEqual(["/api/me", "/api/projects/p1", "/api/projects/p1/beams/b1"]);
     expect(starts.loadEditor).toHaveBeenCalledOnce();
     expect(starts.startWorker).toHaveBeenCalledOnce();
+  });
+});
+
+describe("startEarly on the editor's URL", () => {
+  it("has the worker solve the saved model once the beam has come", async () => {
+    const model = { format: "spanwright.beam/1", nodes: [], segments: [] };
+    vi.stubGlobal("fetch", async (input: string) =>
+      new Response(JSON.stringify(input.includes("/beams/") ? { beam: { id: "b1" }, revision: { version: 1, model } } : {}), { status: 200 }),
+    );
+    const starts = { loadEditor: vi.fn(), startWorker: vi.fn(), presolve: vi.fn() };
+    startEarly("/projects/p1/beams/b1", starts);
+    await vi.waitFor(() => expect(starts.presolve).toHaveBeenCalledWith(model));
   });
 });

@@ -163,11 +163,18 @@ export async function request(
 const early = new Map<string, { at: number; answer: Promise<Answer> }>();
 const EARLY_TTL_MS = 10_000;
 
-/** Starts a GET of `path` now (JSON answer or ApiError), for the app's first request of it. */
-export function requestEarly(path: string): void {
+/**
+ * Starts a GET of `path` now, for the app's first request of it. Returns the JSON body too (an
+ * ApiError rejects it), for a caller that wants to act on it before the app does.
+ */
+export function requestEarly(path: string): Promise<unknown> {
   const answer = send(path, {}, (input, init) => fetch(input, init));
-  answer.catch(() => {}); // the taker sees the error; nobody may have taken it
   early.set(path, { at: Date.now(), answer });
+  const data = answer.then((a) => a.data);
+  // the taker (or the caller) sees an error; either may not be there
+  answer.catch(() => {});
+  data.catch(() => {});
+  return data;
 }
 
 function takeEarly(path: string): Promise<Answer> | null {

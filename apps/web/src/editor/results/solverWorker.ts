@@ -39,6 +39,29 @@ export function requestSolve(model: unknown): number | null {
   return seq;
 }
 
+/**
+ * The saved revision's model, solved as soon as the API has sent it (startEarly.ts), before the
+ * editor has loaded: when the editor's document reads back to the same model, its first render
+ * already has the answer, and the diagrams come with the first paint of the canvas.
+ */
+let saved: { seq: number } | null = null;
+
+export function presolveSaved(model: unknown): void {
+  const w = getSolverWorker();
+  if (!w) return;
+  saved = { seq: nextSolveSeq() };
+  w.postMessage({ seq: saved.seq, model, saved: true });
+}
+
+/** The request number of the saved model's answer when it has come and solved `model` (once). */
+export function presolvedSeq(model: unknown): number | null {
+  if (saved === null) return null;
+  const answer = answers.get(saved.seq);
+  if (!answer) return null; // not yet: the editor asks for itself
+  saved = null;
+  return answer.model === JSON.stringify(model) ? answer.seq : null;
+}
+
 /** The answer to request `seq` if it has come (one of the last few). */
 export function solveAnswer(seq: number): SolveResponse | undefined {
   return answers.get(seq);

@@ -3,7 +3,7 @@ import type { Analysis } from "@spanwright/solver";
 import type { BeamDocument } from "../model/BeamDocument";
 import { toExchange } from "../model/exchange";
 import type { SolveFailure, SolveResponse } from "./solveMessages";
-import { onSolveAnswer, requestSolve, solveAnswer } from "./solverWorker";
+import { onSolveAnswer, presolvedSeq, requestSolve, solveAnswer } from "./solverWorker";
 
 export type AnalysisState =
   | { readonly status: "solving"; readonly analysis: null; readonly error: null }
@@ -42,8 +42,9 @@ export function useAnalysis(doc: BeamDocument): AnalysisState {
   );
   // Asked while rendering, not in an effect after the commit: the worker solves while React still
   // renders and draws the rest of the editor, so a beam's first diagrams come sooner. One request
-  // per model; a render React discards costs only a solve whose answer nobody reads.
-  const seq = useMemo(() => requestSolve(model), [model]);
+  // per model; a render React discards costs only a solve whose answer nobody reads. A beam just
+  // opened may have been solved already, from the saved model (presolveSaved).
+  const seq = useMemo(() => presolvedSeq(model) ?? requestSolve(model), [model]);
   // Until the answer comes, the last state stays (the diagrams do not flicker while typing).
   const [state, setState] = useState<AnalysisState>(() => stateOf(seq) ?? solving);
 
