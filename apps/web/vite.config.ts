@@ -1,4 +1,4 @@
-import { defineConfig } from "vite";
+import { defineConfig, type Plugin } from "vite";
 import react from "@vitejs/plugin-react";
 import tailwindcss from "@tailwindcss/vite";
 
@@ -6,8 +6,29 @@ import tailwindcss from "@tailwindcss/vite";
 // so the browser only ever talks to one origin and the session cookie stays same-site.
 const apiTarget = process.env.SPANWRIGHT_API_URL ?? "http://127.0.0.1:3000";
 
+/**
+ * src/boot.ts (which starts the first screen's requests, the editor chunk and the engine worker) as
+ * its own small entry, loaded by index.html before the app's entry: it runs as soon as it is
+ * compiled, instead of after the browser has compiled the whole app entry (React, the router...).
+ * main.tsx imports it too (development, and the build's module graph), so it runs once either way.
+ */
+function bootFirst(): Plugin {
+  return {
+    name: "spanwright-boot-first",
+    apply: "build",
+    transformIndexHtml: {
+      order: "post",
+      handler(_html, context) {
+        const boot = Object.values(context.bundle ?? {}).find((c) => c.type === "chunk" && c.isEntry && c.name === "boot");
+        if (!boot) throw new Error("vite.config.ts: no boot entry in the bundle");
+        return [{ tag: "script", attrs: { type: "module", crossorigin: true, src: `/${boot.fileName}` }, injectTo: "head-prepend" }];
+      },
+    },
+  };
+}
+
 export default defineConfig({
-  plugins: [react(), tailwindcss()],
+  plugins: [react(), tailwindcss(), bootFirst()],
   server: {
     host: "127.0.0.1",
     proxy: {
@@ -26,5 +47,8 @@ export default defineConfig({
     sourcemap: true,
     // dist/.vite/manifest.json: which chunks each page loads (`pnpm firstpaint` reports their sizes)
     manifest: true,
+    rollupOptions: {
+      input: { index: "index.html", boot: "src/boot.ts" },
+    },
   },
 });

@@ -1,4 +1,5 @@
-// First, before React evaluates: starts the first screen's requests, chunk and engine worker.
+// First, before React evaluates: starts the first screen's requests, chunk and engine worker. In
+// the build it is also its own entry, which index.html loads before this one (vite.config.ts).
 import "./boot";
 import { StrictMode } from "react";
 import { createRoot } from "react-dom/client";
