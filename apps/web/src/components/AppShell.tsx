@@ -4,6 +4,7 @@ import { OutboxLink } from "../outbox/OutboxLink";
 import { Caution } from "./Caution";
 import { Wordmark } from "./Logo";
 import { UserMenu } from "./UserMenu";
+import { usePrefetchEditor } from "../prefetchEditor";
 
 function navLinkClasses({ isActive }: { isActive: boolean }): string {
   return `rounded-md px-3 py-1.5 text-sm ${isActive ? "bg-ink-700 text-paper-50" : "text-paper-300 hover:text-paper-50"}`;
@@ -11,6 +12,7 @@ function navLinkClasses({ isActive }: { isActive: boolean }): string {
 
 /** Header, page body and footer for everything behind sign-in. */
 export function AppShell({ user }: { user: User }) {
+  usePrefetchEditor();
   const navigation = useNavigation();
   return (
     <div className="flex min-h-screen flex-col">
