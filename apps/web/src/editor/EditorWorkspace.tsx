@@ -1,4 +1,4 @@
-import { useEffect, useMemo, useState } from "react";
+import { startTransition, useEffect, useMemo, useState } from "react";
 import { useEditor, useEditorStore } from "./store/useEditor";
 import { useAnalysis } from "./results/useAnalysis";
 import { locateError } from "./results/errorLocation";
@@ -36,6 +36,12 @@ export function EditorWorkspace() {
   const errorRange = useMemo(() => (analysis.status === "failed" ? locateError(analysis.error, doc) : null), [analysis, doc]);
   const [tab, setTab] = useState<TabId>("nodes");
   useShortcuts(store);
+  // The table under the results renders just after the first paint (canvas and diagrams first).
+  const [tableShown, setTableShown] = useState(false);
+  useEffect(() => {
+    const frame = requestAnimationFrame(() => startTransition(() => setTableShown(true)));
+    return () => cancelAnimationFrame(frame);
+  }, []);
   // The design parts (dialogs, checks, theory) load once the first results are on screen.
   const settled = analysis.status !== "solving";
   useEffect(() => {
@@ -86,7 +92,7 @@ export function EditorWorkspace() {
           ))}
         </div>
         <div id="editor-table-panel" role="tabpanel" aria-labelledby={`tab-${tab}`} className="overflow-x-auto p-2">
-          <Active />
+          {tableShown ? <Active /> : <p className="p-2 text-sm text-paper-600">Loading the table…</p>}
         </div>
       </section>
     </div>
