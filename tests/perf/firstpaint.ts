@@ -21,7 +21,8 @@
  * FIRSTPAINT_VERBOSE=1 (the median run's requests on a timeline), FIRSTPAINT_PROFILE=1 (the
  * median run's main-thread CPU by function), FIRSTPAINT_COMPARE=<another build's dist folder>
  * (a second server serves it; runs alternate between the two builds, so both see the same load:
- * keep a copy of dist from before a change to compare with), SPANWRIGHT_CHROMIUM.
+ * keep a copy of dist from before a change to compare with), FIRSTPAINT_TRACE=<file> (a Chrome
+ * trace of the editor page, the last run's kept, for Perfetto), SPANWRIGHT_CHROMIUM.
  */
 import { execFileSync, spawn, type ChildProcess } from "node:child_process";
 import fs from "node:fs";
@@ -41,6 +42,8 @@ const beamPrefix = process.env.FIRSTPAINT_BEAM ?? "RB-2";
 const verbose = process.env.FIRSTPAINT_VERBOSE === "1";
 const profiling = process.env.FIRSTPAINT_PROFILE === "1";
 const compareDir = process.env.FIRSTPAINT_COMPARE;
+/** A Chrome trace of each run's editor page (the last run's is left there), for chrome://tracing or Perfetto. */
+const tracePath = process.env.FIRSTPAINT_TRACE;
 const demo = { email: "demo@spanwright.test", password: "spanwright-demo" };
 const chromiumArgs = ["--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"];
 const pageTimeoutMs = 60_000;
@@ -259,6 +262,7 @@ async function measureOnce(browser: Browser, baseUrl: string, beamPath: string, 
       await cdp.send("Profiler.setSamplingInterval", { interval: 200 });
       await cdp.send("Profiler.start");
     }
+    if (tracePath) await browser.startTracing(page, { path: tracePath, screenshots: false });
     await page.goto(beamPath, { waitUntil: "commit" });
     // Run in the page: globalThis is its window (no DOM types here). No named inner functions, for
     // which tsx would add a helper (__name) the page does not have; no strings, which the CSP refuses.
@@ -273,6 +277,7 @@ async function measureOnce(browser: Browser, baseUrl: string, beamPath: string, 
         .getEntriesByType("resource")
         .map((r: any) => ({ name: new URL(r.name).pathname, start: r.startTime, end: r.responseEnd, bytes: r.transferSize })),
     )) as RunFigures["requests"];
+    if (tracePath) await browser.stopTracing();
     let profile: Map<string, number> | undefined;
     if (cdp) {
       const answer = (await cdp.send("Profiler.stop")) as unknown as { profile: CpuProfile };
@@ -322,7 +327,9 @@ function printSizes(dir: string): void {
     return;
   }
   const manifest = JSON.parse(fs.readFileSync(manifestPath, "utf8")) as Manifest;
-  const entryKey = Object.keys(manifest).find((k) => manifest[k]!.isEntry)!;
+  // index.html loads every entry (the app and its small boot script, see vite.config.ts)
+  const entryKeys = Object.keys(manifest).filter((k) => manifest[k]!.isEntry);
+  const entryKey = entryKeys.find((k) => k === "index.html") ?? entryKeys[0]!;
   const keyOf = (src: string) => Object.keys(manifest).find((k) => manifest[k]!.src === src);
   const signInKey = keyOf("src/pages/auth/SignInPage.tsx");
   const editorKey = keyOf("src/editor/BeamEditorPage.tsx");
@@ -340,19 +347,20 @@ function printSizes(dir: string): void {
     if (files.length > 1) console.log(`  ${"total".padEnd(44)} ${kB(raw).padStart(10)} ${kB(gzip).padStart(10)} gzip`);
   };
 
-  const entry = staticClosure(manifest, entryKey);
+  const entry = new Set<string>();
+  for (const key of entryKeys) staticClosure(manifest, key, entry);
   const signIn = signInKey ? staticClosure(manifest, signInKey, new Set(entry)) : entry;
   table("sign-in page JS (entry chunk, its imports and the sign-in route):", signIn);
   if (!editorKey) return;
   const editorAll = staticClosure(manifest, editorKey);
   const editorOwn = [...editorAll].filter((k) => !signIn.has(k));
-  const shared = [...editorAll].filter((k) => k !== entryKey && signIn.has(k));
+  const shared = [...editorAll].filter((k) => !entry.has(k) && signIn.has(k));
   table("editor chunks loaded on opening a beam (beyond the sign-in page's JS):", editorOwn);
   if (shared.length > 0) console.log(`  (also uses, already loaded by sign-in: ${shared.map((k) => path.basename(manifest[k]!.file)).join(", ")})`);
   const css = manifest[entryKey]!.css ?? [];
   if (css.length > 0) table("stylesheet (entry):", [], css);
-  const workers = [...editorAll].flatMap((k) => manifest[k]!.assets ?? []).filter((f) => f.endsWith(".js"));
-  if (workers.length > 0) table("solver worker (started by the editor):", [], workers);
+  const workers = [...new Set([...entry, ...editorAll].flatMap((k) => manifest[k]!.assets ?? []).filter((f) => f.endsWith(".js")))];
+  if (workers.length > 0) table("solver worker (started on the editor's URL):", [], workers);
   const lazy = new Set<string>();
   for (const k of editorOwn) for (const d of manifest[k]!.dynamicImports ?? []) if (!editorAll.has(d)) lazy.add(d);
   const lazyOwn = [...lazy].flatMap((k) => [...staticClosure(manifest, k)]).filter((k) => !editorAll.has(k) && !signIn.has(k));
@@ -397,6 +405,13 @@ function printFigures(build: Build): void {
     const total = top.reduce((sum, [, t]) => sum + t, 0);
     console.log(`main-thread CPU of the median run: ${ms(total)} busy; most self time:`);
     for (const [name, t] of top.slice(0, 25)) console.log(`  ${ms(t).padStart(8)}  ${name}`);
+    const byFile = new Map<string, number>();
+    for (const [name, t] of top) {
+      const file = name.slice(name.lastIndexOf(" ") + 1).replace(/:\d+$/, "") || "(native)";
+      byFile.set(file, (byFile.get(file) ?? 0) + t);
+    }
+    console.log("by file:");
+    for (const [file, t] of [...byFile].sort((a, b) => b[1] - a[1]).slice(0, 12)) console.log(`  ${ms(t).padStart(8)}  ${file}`);
   }
 }
 
