@@ -22,6 +22,10 @@ export const routes: RouteObject[] = [
         lazy: async () => ({ Component: (await import("./pages/auth/SignUpPage")).SignUpPage }),
       },
       {
+        path: "verify-email",
+        lazy: async () => ({ Component: (await import("./pages/verify/VerifyEmailPage")).VerifyEmailPage }),
+      },
+      {
         element: <RequireAuth />,
         children: [
           { index: true, element: <Navigate to="/projects" replace /> },

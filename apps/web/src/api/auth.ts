@@ -70,3 +70,30 @@ export function useSignOut() {
     },
   });
 }
+
+/**
+ * Follows the link of the verification e-mail. The user (if this browser is theirs) and their
+ * project list change, so both are fetched again.
+ */
+export function useVerifyEmail() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (token: string) =>
+      request(routePath("verifyEmail"), {
+        method: "POST",
+        body: { token },
+        parse: parseWith("verifyEmailResponseSchema"),
+      }),
+    onSuccess: () => {
+      void queryClient.invalidateQueries({ queryKey: queryKeys.me });
+      void queryClient.invalidateQueries({ queryKey: queryKeys.projects });
+    },
+  });
+}
+
+/** Asks for a new verification link for the signed-in user's address. */
+export function useResendVerification() {
+  return useMutation({
+    mutationFn: () => request(routePath("resendVerification"), { method: "POST" }),
+  });
+}

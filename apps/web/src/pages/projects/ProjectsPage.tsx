@@ -4,6 +4,7 @@ import { Card, PageHeader } from "../../components/PageHeader";
 import { Loading, QueryError } from "../../components/QueryState";
 import { formatDate } from "../../formatDate";
 import { roleLabels, unitSystemLabels } from "../../roleLabels";
+import { VerifyEmailBanner } from "../verify/VerifyEmailBanner";
 import { CreateProjectForm } from "./CreateProjectForm";
 
 export function ProjectsPage() {
@@ -13,6 +14,7 @@ export function ProjectsPage() {
   return (
     <>
       <PageHeader title="Projects" eyebrow="Your workspace" />
+      <VerifyEmailBanner />
       <div className="grid items-start gap-8 lg:grid-cols-[minmax(0,2fr)_minmax(0,1fr)]">
         <section aria-labelledby="project-list-heading">
           <h2 id="project-list-heading" className="sr-only">
