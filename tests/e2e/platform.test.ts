@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { uniqueEmail } from "@spanwright/api/testing";
+import { findVerificationLink, uniqueEmail } from "@spanwright/api/testing";
 import { flowTimeoutMs, setupTimeoutMs, startE2e, type E2eEnvironment } from "./harness";
 
 // Issue 7, real-browser suite: sign-up, sign-in, a project, an invitation with a role, sign-out,
@@ -14,7 +14,7 @@ afterAll(async () => {
 
 describe("the platform in a real browser", () => {
   it(
-    "lets a lead sign up, create a project and invite an engineer who then signs up and sees it",
+    "lets a lead sign up, create a project and invite an engineer who then signs up, confirms the e-mail and sees it",
     async () => {
       const lead = { name: "Rosalind Achterberg", email: uniqueEmail("rosalind"), password: "granite quarry lantern 42" };
       const invitee = { name: "Kofi Lindqvist", email: uniqueEmail("kofi"), password: "copper kettle harbour 17" };
@@ -70,7 +70,7 @@ describe("the platform in a real browser", () => {
       await invite.getByLabel("E-mail").fill(invitee.email);
       await invite.getByLabel("Role").selectOption({ label: "Engineer" });
       await invite.getByRole("button", { name: "Invite" }).click();
-      await page.getByText(`${invitee.email} was added. They will see the project once they create an account with that e-mail.`).waitFor();
+      await page.getByText(`${invitee.email} was added. They will see the project once they create an account with that e-mail and confirm it from the link we send.`).waitFor();
       await env.screenshot(page, "members");
 
       // The lead signs out; the user menu is gone and protected pages send back to sign-in.
@@ -89,6 +89,17 @@ describe("the platform in a real browser", () => {
       await p2.getByLabel("E-mail").fill(invitee.email);
       await p2.getByLabel("Password").fill(invitee.password);
       await p2.getByRole("button", { name: "Create account" }).click();
+      await p2.waitForURL((url) => url.pathname === "/projects");
+      // Signing up proves nothing about the address: the project stays closed until the invitee
+      // follows the link mailed to it (here from the local mail catcher).
+      await p2.getByText("Check your e-mail to join the projects you were invited to").waitFor();
+      await p2.getByText("No projects yet").waitFor();
+      await env.screenshot(p2, "verify-banner");
+      const link = await findVerificationLink(env.app.services.mailer, invitee.email);
+      expect(link?.origin).toBe(env.baseUrl);
+      await p2.goto(link!.pathname + link!.search);
+      await p2.getByText("Your e-mail is confirmed").waitFor();
+      await p2.getByRole("link", { name: "Go to your projects" }).click();
       await p2.waitForURL((url) => url.pathname === "/projects");
       const card = p2.getByRole("link", { name: new RegExp(projectName) });
       await card.waitFor();

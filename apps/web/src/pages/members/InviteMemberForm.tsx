@@ -54,7 +54,7 @@ export function InviteMemberForm({ projectId }: { projectId: string }) {
       {invited !== null && (
         <Alert tone="success">
           {invited.pending
-            ? `${invited.email} was added. They will see the project once they create an account with that e-mail.`
+            ? `${invited.email} was added. They will see the project once they create an account with that e-mail and confirm it from the link we send.`
             : `${invited.name} was added and can open the project now.`}
         </Alert>
       )}
