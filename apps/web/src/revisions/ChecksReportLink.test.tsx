@@ -30,7 +30,7 @@ const second = section("1c7d2f63-4a5b-4e9c-8b8d-6f3a2e4d5c6b", "Mezzanine I-360"
 /** Invented saved design settings: the first section, ASD, braces every 2 m. */
 const saved = { section: { source: "project", sectionId: first.id }, material: null, method: "ASD", lb: 2, cb: "equation-f1-1", strengthIds: null, deflection: null, allowableBending: null, allowableShear: null };
 
-function renderLink(units: "si" | "us", designSettings: unknown = null) {
+function renderLink(units: "si" | "us", designSettings: unknown = null, beamStatus = 200) {
   const beam = {
     beam: { id: B, projectId: P, name: "B-12", latestVersion: 3, createdAt: when, updatedAt: when },
     revision: {
@@ -42,7 +42,7 @@ function renderLink(units: "si" | "us", designSettings: unknown = null) {
   };
   vi.stubGlobal("fetch", stubFetch({
     [`GET /api/projects/${P}/sections`]: { status: 200, body: { sections: [first, second] } },
-    [`GET /api/projects/${P}/beams/${B}`]: { status: 200, body: beam },
+    [`GET /api/projects/${P}/beams/${B}`]: beamStatus === 200 ? { status: 200, body: beam } : { status: beamStatus, body: { error: { code: "internal", message: "the beam could not be read" } } },
   }));
   renderWithProviders(<ChecksReportLink projectId={P} beamId={B} version={3} units={units} />);
 }
@@ -52,7 +52,7 @@ const hrefOf = () => new URL(screen.getByRole("link", { name: "PDF report with m
 describe("ChecksReportLink", () => {
   it("carries the chosen section, the method and Lb converted to metres", async () => {
     renderLink("us");
-    fireEvent.change(await screen.findByLabelText("Project section"), { target: { value: second.id } });
+    fireEvent.change(await screen.findByLabelText("Section"), { target: { value: second.id } });
     fireEvent.change(screen.getByLabelText("Method"), { target: { value: "ASD" } });
     fireEvent.change(screen.getByLabelText(/Unbraced length Lb/), { target: { value: "10" } });
     const url = hrefOf();
@@ -65,11 +65,11 @@ describe("ChecksReportLink", () => {
 
   it("leaves lb out when empty (braced at the supports only) and withholds the link for Lb ≤ 0", async () => {
     renderLink("si");
-    await screen.findByLabelText("Project section");
+    await screen.findByLabelText("Section");
     const url = hrefOf();
+    // Nothing saved: the link must name a section; LRFD and eq. F1-1 are the report's own defaults.
+    expect([...url.searchParams.keys()]).toEqual(["sectionId"]);
     expect(url.searchParams.get("sectionId")).toBe(first.id);
-    expect(url.searchParams.get("method")).toBe("LRFD");
-    expect(url.searchParams.has("lb")).toBe(false);
     expect(screen.getByText(/empty: at the supports only/)).toBeTruthy();
     fireEvent.change(screen.getByLabelText(/Unbraced length Lb/), { target: { value: "0" } });
     expect(screen.queryByRole("link", { name: "PDF report with member checks" })).toBeNull();
@@ -93,6 +93,61 @@ describe("ChecksReportLink on a beam with saved design settings", () => {
     renderLink("us", saved);
     // 2 m / 0.3048 m/ft = 6.5617 ft (NIST SP 811, appendix B), shown to 4 significant digits
     expect(((await screen.findByLabelText(/Unbraced length Lb/)) as HTMLInputElement).placeholder).toBe("saved: 6.562 ft");
+  });
+});
+
+describe("ChecksReportLink starting from the saved section, material, method and Cb", () => {
+  it("links the report as saved (no query) and names only what the user changes", async () => {
+    renderLink("si", { ...saved, cb: "unity" });
+    const sectionField = (await screen.findByLabelText("Section")) as HTMLSelectElement;
+    expect(sectionField.value).toBe(first.id);
+    expect(sectionField.selectedOptions[0]?.textContent).toBe("Mezzanine I-300 (saved)");
+    expect((screen.getByLabelText("Method") as HTMLSelectElement).value).toBe("ASD");
+    expect((screen.getByLabelText("Cb") as HTMLSelectElement).value).toBe("unity");
+    expect(hrefOf().search).toBe("");
+
+    fireEvent.change(screen.getByLabelText("Method"), { target: { value: "LRFD" } });
+    expect([...hrefOf().searchParams.entries()]).toEqual([["method", "LRFD"]]);
+    fireEvent.change(screen.getByLabelText("Cb"), { target: { value: "equation-f1-1" } });
+    fireEvent.change(sectionField, { target: { value: second.id } });
+    expect([...hrefOf().searchParams.entries()]).toEqual([["sectionId", second.id], ["method", "LRFD"], ["cb", "equation-f1-1"]]);
+    // back to the saved ones: the link is the plain report again
+    fireEvent.change(sectionField, { target: { value: first.id } });
+    fireEvent.change(screen.getByLabelText("Method"), { target: { value: "ASD" } });
+    fireEvent.change(screen.getByLabelText("Cb"), { target: { value: "unity" } });
+    expect(hrefOf().search).toBe("");
+  });
+
+  it("keeps the saved material with the saved section and says another section is checked in its own", async () => {
+    // Invented: the saved section checked in a steel whose Fy the engineer raised from mill certificates.
+    renderLink("si", { ...saved, material: { ...steel, name: "A992, Fy from mill certificates (demo)", Fy: 380e6 } });
+    expect(await screen.findByText("Material: A992, Fy from mill certificates (demo), saved with the beam.")).toBeTruthy();
+    expect(hrefOf().searchParams.has("sectionId")).toBe(false);
+    fireEvent.change(screen.getByLabelText("Section"), { target: { value: second.id } });
+    expect(screen.getByText(/Material: the section's own, .*saved A992, Fy from mill certificates \(demo\) goes with the saved section only/)).toBeTruthy();
+  });
+
+  it("offers a saved typed section, which the link leaves to the report", async () => {
+    renderLink("si", { ...saved, section: { source: "typed", name: "Edge beam I-360", shape: { kind: "i-shape", d: 0.36, bf: 0.17, tf: 0.0127, tw: 0.008 } }, material: steel });
+    const sectionField = (await screen.findByLabelText("Section")) as HTMLSelectElement;
+    expect(sectionField.selectedOptions[0]?.textContent).toBe("Edge beam I-360 (saved, typed for this beam)");
+    expect(hrefOf().search).toBe("");
+    fireEvent.change(sectionField, { target: { value: first.id } });
+    expect([...hrefOf().searchParams.entries()]).toEqual([["sectionId", first.id]]);
+  });
+
+  it("names a project section when the saved one has been deleted, and says so", async () => {
+    renderLink("si", { ...saved, section: { source: "project", sectionId: "2d8e3a74-5b6c-4fad-9c9e-7a4b3f5e6d7c" } });
+    await screen.findByLabelText("Section");
+    expect(screen.getByText(/project section saved with this beam has been deleted/)).toBeTruthy();
+    // the saved ASD still applies, so only the section is named
+    expect([...hrefOf().searchParams.entries()]).toEqual([["sectionId", first.id]]);
+  });
+
+  it("names every part when the beam's settings cannot be read", async () => {
+    renderLink("si", null, 500);
+    await screen.findByLabelText("Section");
+    expect([...hrefOf().searchParams.entries()]).toEqual([["sectionId", first.id], ["method", "LRFD"], ["cb", "equation-f1-1"]]);
   });
 });
 
