@@ -1,8 +1,8 @@
-import { useState, type FormEvent } from "react";
+import { useEffect, useState, type FormEvent } from "react";
 import { Link, Navigate, useNavigate, useSearchParams } from "react-router";
-import { signInRequestSchema } from "@spanwright/contracts";
 import { useMe, useSignIn } from "../../api/auth";
 import { isApiError, type FieldErrors } from "../../api/client";
+import { loadSchemas } from "../../api/schemas";
 import { Alert } from "../../components/Alert";
 import { AuthLayout } from "../../components/AuthLayout";
 import { Button } from "../../components/Button";
@@ -17,9 +17,15 @@ export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {
   const signIn = useSignIn();
   const [clientErrors, setClientErrors] = useState<FieldErrors>({});
 
-  function handleSubmit(event: FormEvent<HTMLFormElement>) {
+  // The form's schema comes with the contracts' chunk, not with this page: loaded once the form is
+  // on screen, so the page paints without zod and the check is ready by the time the user submits.
+  useEffect(() => void loadSchemas(), []);
+
+  async function handleSubmit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();
-    const result = validateForm(signInRequestSchema, formValues(event.currentTarget));
+    const values = formValues(event.currentTarget);
+    const { signInRequestSchema } = await loadSchemas();
+    const result = validateForm(signInRequestSchema, values);
     if (!result.ok) {
       setClientErrors(result.errors);
       signIn.reset();
@@ -34,7 +40,7 @@ export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {
   const wrongCredentials = isApiError(signIn.error) && signIn.error.code === "invalid-credentials";
 
   return (
-    <form noValidate onSubmit={handleSubmit} className="space-y-4">
+    <form noValidate onSubmit={(event) => void handleSubmit(event)} className="space-y-4">
       {message !== null && (
         <Alert tone="error" title={wrongCredentials ? "Sign-in failed" : "Could not sign in"}>
           {wrongCredentials ? "That e-mail and password do not match an account." : message}
