@@ -71,18 +71,3 @@ export function useDeleteSection(projectId: string) {
     onSuccess: () => void queryClient.invalidateQueries({ queryKey: sectionKeys.list(projectId), exact: true }),
   });
 }
-
-/** How the report's member checks read the model: method, and the unbraced length Lb in m (null: braced at the supports only). */
-export interface ReportCheckOptions {
-  readonly method?: "LRFD" | "ASD";
-  readonly lb?: number | null;
-}
-
-/** The calculation report with the member checks of one project section (`?sectionId=&method=&lb=`, lb in m). */
-export function reportPdfWithChecksUrl(projectId: string, beamId: string, version: number, sectionId: string, options: ReportCheckOptions = {}): string {
-  const query = new URLSearchParams({ sectionId });
-  if (options.method !== undefined) query.set("method", options.method);
-  // shortest round-trip form: the API reads exactly the metres the user's value converts to
-  if (options.lb !== undefined && options.lb !== null) query.set("lb", String(options.lb));
-  return `${routePath("getReportPdf", { projectId, beamId, version })}?${query.toString()}`;
-}
