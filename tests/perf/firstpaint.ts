@@ -3,9 +3,10 @@
  * production build, in Debian's Chromium (headless, through playwright-core; nothing downloaded).
  * A script that prints figures, not a timed test.
  *
- * It builds nothing: build the web app first (`pnpm --filter @spanwright/web build`). It serves a
- * private copy of apps/web/dist (so a rebuild during the run cannot break a page) from the
- * production API (`NODE_ENV=production`, as `npm start` runs it) on 127.0.0.1 with a fresh
+ * It builds nothing: build the web app first (`pnpm --filter @spanwright/web build`) and the API's
+ * server bundle (`pnpm --filter @spanwright/api build`; without it the API runs from source through
+ * tsx, and says so). It serves a private copy of apps/web/dist (so a rebuild during the run cannot
+ * break a page) from the production API (`NODE_ENV=production`, as `npm start` runs it) on 127.0.0.1 with a fresh
  * database on the project's PostgreSQL cluster, migrated and seeded with the demo data. Per run: a
  * fresh browser profile signs in through the sign-in form as the demo user (so the entry chunk is
  * cached, as for a real user), then a new page opens the demo beam's editor URL. Times are from
@@ -152,11 +153,14 @@ function stopChild(child: ChildProcess): Promise<void> {
   });
 }
 
+/** The production server bundle (`pnpm --filter @spanwright/api build`), as `npm start` runs it. */
+const apiBundled = fs.existsSync(path.join(root, "apps/api/dist/main.mjs"));
+
 async function startServer(webDir: string, databaseUrl: string): Promise<string> {
   const port = await freePort();
   const baseUrl = `http://127.0.0.1:${port}`;
   const log: string[] = [];
-  const server = spawn(process.execPath, ["--import", "tsx", "src/main.ts"], {
+  const server = spawn(process.execPath, apiBundled ? ["dist/main.mjs"] : ["--import", "tsx", "src/main.ts"], {
     cwd: path.join(root, "apps/api"),
     env: {
       ...process.env,
@@ -443,6 +447,11 @@ async function main(): Promise<void> {
   stops.push(() => browser.close());
 
   console.log(`first paint of "${beam.name}" (${beam.path}), production build, Chromium headless 1400×1000`);
+  console.log(
+    apiBundled
+      ? "API: the production bundle apps/api/dist/main.mjs"
+      : "API: apps/api/src through tsx (no apps/api/dist/main.mjs; `pnpm --filter @spanwright/api build` makes it)",
+  );
   console.log(`load average before: ${load()} (${os.cpus().length} cores)`);
   for (const build of builds) {
     const warmUp = await measureOnce(browser, build.baseUrl, beam.path, beam.name);
