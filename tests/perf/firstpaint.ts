@@ -93,15 +93,22 @@ const probe = `(() => {
 // Processes and the database.
 
 const stops: Array<() => void | Promise<void>> = [];
-async function stopAll(): Promise<void> {
-  for (const stop of stops.reverse()) {
+/** Undoes what was started, newest first, all but the first `keep` things. */
+async function stopAll(keep = 0): Promise<void> {
+  while (stops.length > keep) {
     try {
-      await stop();
+      await stops.pop()!();
     } catch (error) {
       console.error("firstpaint: cleanup:", error instanceof Error ? error.message : error);
     }
   }
-  stops.length = 0;
+}
+// Ctrl-C, a kill, or a closed pipe (`| head`) must not leave a server, a browser or a database behind.
+process.stdout.on("error", () => {});
+for (const signal of ["SIGINT", "SIGTERM", "SIGHUP"] as const) {
+  process.once(signal, () => {
+    void stopAll().finally(() => process.exit(130));
+  });
 }
 
 function db(...args: string[]): string {
@@ -465,6 +472,9 @@ async function main(): Promise<void> {
     }
   }
   console.log(`load average after: ${load()}`);
+  // Stop the browser, servers and database before the report (the dist copies, pushed first, stay
+  // for the sizes), so that a reader who stops reading early (\`| head\`) leaves nothing running.
+  await stopAll(copies.length);
   for (const build of builds) printFigures(build);
   for (const build of builds) {
     if (builds.length > 1) console.log(`\n===== bundle sizes of ${build.label}`);
