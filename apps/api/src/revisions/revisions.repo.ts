@@ -1,8 +1,9 @@
+import { randomUUID } from "node:crypto";
 import { and, desc, eq } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
-import type { Revision, RevisionSummary } from "@spanwright/contracts";
+import type { Revision, RevisionSummary, UnitSystem } from "@spanwright/contracts";
 import type { Db } from "../db/client.js";
-import { beamRevisions, revisionResults, users } from "../db/schema.js";
+import { beamRevisions, beams, projects, revisionResults, users } from "../db/schema.js";
 
 const checker = alias(users, "checker");
 
@@ -74,39 +75,48 @@ export async function findRevision(db: Db, beamId: string, version: number): Pro
   };
 }
 
-/** Only the stored model of a revision (the save's change summary needs nothing else). */
-export async function findRevisionModel(db: Db, beamId: string, version: number): Promise<Record<string, unknown> | null> {
+/**
+ * What a save needs besides the caller's role, in one round trip: that the beam is in the project,
+ * the project's unit system, the author's name and the base revision's model (null if that
+ * revision does not exist). Null when the beam is not in the project.
+ */
+export async function findSaveContext(
+  db: Db,
+  ids: { projectId: string; beamId: string; baseVersion: number; authorId: string },
+): Promise<{ unitSystem: UnitSystem; authorName: string | null; baseModel: Record<string, unknown> | null } | null> {
   const [row] = await db
-    .select({ model: beamRevisions.model })
-    .from(beamRevisions)
-    .where(and(eq(beamRevisions.beamId, beamId), eq(beamRevisions.version, version)));
-  return (row?.model as Record<string, unknown> | undefined) ?? null;
+    .select({ unitSystem: projects.unitSystem, authorName: users.name, baseModel: beamRevisions.model })
+    .from(beams)
+    .innerJoin(projects, eq(projects.id, beams.projectId))
+    .leftJoin(users, eq(users.id, ids.authorId))
+    .leftJoin(beamRevisions, and(eq(beamRevisions.beamId, beams.id), eq(beamRevisions.version, ids.baseVersion)))
+    .where(and(eq(beams.id, ids.beamId), eq(beams.projectId, ids.projectId)));
+  if (!row) return null;
+  return { unitSystem: row.unitSystem, authorName: row.authorName, baseModel: (row.baseModel as Record<string, unknown> | null) ?? null };
 }
 
-/** The name a revision shows for its author. */
-export async function findAuthorName(db: Db, userId: string): Promise<string | null> {
-  const [row] = await db.select({ name: users.name }).from(users).where(eq(users.id, userId));
-  return row?.name ?? null;
-}
-
-/** Writes a revision and its result; the caller runs this inside the transaction that bumped the version. */
+/**
+ * Writes a revision and its result; the caller runs this inside the transaction that bumped the
+ * version. The row id is made here, so both inserts go to the server in one write (the driver
+ * pipelines them; the server runs them in order).
+ */
 export async function insertRevisionWithResult(
   db: Db,
   values: { beamId: string; version: number; model: unknown; result: unknown; authorId: string; changeSummary: string; now: Date },
 ): Promise<void> {
-  const [row] = await db
-    .insert(beamRevisions)
-    .values({
+  const id = randomUUID();
+  await Promise.all([
+    db.insert(beamRevisions).values({
+      id,
       beamId: values.beamId,
       version: values.version,
       model: values.model,
       authorId: values.authorId,
       changeSummary: values.changeSummary,
       createdAt: values.now,
-    })
-    .returning({ id: beamRevisions.id });
-  if (!row) throw new Error("insert beam_revisions returned no row");
-  await db.insert(revisionResults).values({ revisionId: row.id, result: values.result, createdAt: values.now });
+    }),
+    db.insert(revisionResults).values({ revisionId: id, result: values.result, createdAt: values.now }),
+  ]);
 }
 
 /** Marks a draft checked; false when it was no longer a draft (checked revisions are immutable). */

@@ -8,7 +8,7 @@ import { inTransaction, type Db } from "../db/client.js";
 import { AppError } from "../http/appError.js";
 import { runSolver, type Engine } from "../solve/engine.js";
 import { summariseRevisionChange } from "./changeSummary.js";
-import { asBeamModel, findProjectInfo } from "./revisionContext.js";
+import { asBeamModel } from "./revisionContext.js";
 import * as repo from "./revisions.repo.js";
 
 /** A promise whose rejection is handled now and rethrown where it is awaited (outcomes taken in order). */
@@ -52,34 +52,25 @@ export function createRevisionsService(deps: { db: Db; clock: Clock; engine: Eng
       // before all of them have succeeded.
       const solving = quietly(runSolver(engine, input.model));
       const access = quietly(authorize(db, projectId, actorId, "edit"));
-      const beam = quietly(beams.requireBeam(db, projectId, beamId));
-      const base = quietly(repo.findRevisionModel(db, beamId, input.baseVersion));
-      const project = quietly(findProjectInfo(db, projectId));
-      const author = quietly(repo.findAuthorName(db, actorId));
+      const found = quietly(repo.findSaveContext(db, { projectId, beamId, baseVersion: input.baseVersion, authorId: actorId }));
       await access;
-      await beam;
+      const context = await found;
+      if (!context) throw new AppError("not-found", "beam not found");
       const result = await solving;
-      const baseModel = await base;
       const changeSummary = summariseRevisionChange(
-        baseModel ? asBeamModel(baseModel) : null,
+        context.baseModel ? asBeamModel(context.baseModel) : null,
         asBeamModel(input.model),
-        (await project)?.unitSystem ?? "si",
+        context.unitSystem,
         input.changeSummary,
       );
       const now = clock.now();
       const version = input.baseVersion + 1;
       const saved = await inTransaction(db, async (tx) => {
         if (!(await advanceVersion(tx, beamId, input.baseVersion, now))) return false;
-        await repo.insertRevisionWithResult(tx, {
-          beamId,
-          version,
-          model: input.model,
-          result,
-          authorId: actorId,
-          changeSummary,
-          now,
-        });
-        await recordAudit(tx, { projectId, actorId, action: "revision.saved", details: { beamId, version } });
+        await Promise.all([
+          repo.insertRevisionWithResult(tx, { beamId, version, model: input.model, result, authorId: actorId, changeSummary, now }),
+          recordAudit(tx, { projectId, actorId, action: "revision.saved", details: { beamId, version } }),
+        ]);
         return true;
       });
       if (!saved) {
@@ -94,7 +85,7 @@ export function createRevisionsService(deps: { db: Db; clock: Clock; engine: Eng
       // what was just written, as a read would give it: no second round trip for a large result
       return {
         version,
-        author: { id: actorId, name: (await author) ?? "" },
+        author: { id: actorId, name: context.authorName ?? "" },
         createdAt: now.toISOString(),
         changeSummary,
         status: "draft",
