@@ -39,7 +39,7 @@ const envSchema = z.object({
   PUBLIC_URL: z.string().url().optional(),
   /** Longest one solve may run on a solver thread before it is stopped (422 too-large). */
   SOLVE_TIMEOUT_MS: z.coerce.number().int().positive().default(5000),
-  /** Solver threads; default: the cores available. */
+  /** Solver threads; default: the cores available less one (the event loop's), at least one. */
   SOLVER_THREADS: z.coerce.number().int().positive().optional(),
 });
 

@@ -25,7 +25,7 @@ export type WorkerReply =
     };
 
 export interface SolverPoolOptions {
-  /** Solver threads; default: the cores available to this process. */
+  /** Solver threads; default: the cores available to this process less one, at least one. */
   threads?: number;
   /** Longest a solve may run once started; past it the thread is ended and replaced (422 `too-large`). */
   timeoutMs: number;
@@ -76,7 +76,9 @@ function solverFailure(reply: Extract<WorkerReply, { ok: false }>["error"]): Err
  * solve: a thread past it is terminated (the only way to stop synchronous code) and replaced.
  */
 export function createSolverPool(options: SolverPoolOptions): SolverPool {
-  const threads = Math.max(1, options.threads ?? os.availableParallelism());
+  // one core is left to the event loop (HTTP, database, JSON): on the 2-core machine two solver
+  // threads beside it made the load test slower and its latency tail longer than one
+  const threads = Math.max(1, options.threads ?? os.availableParallelism() - 1);
   const maxQueue = options.maxQueue ?? 64 * threads;
   const maxWaitMs = options.maxWaitMs ?? 2 * options.timeoutMs;
   const busy = () => new AppError("solver-busy", "the solver is busy; try again in a few seconds", { retryAfterSeconds: 2 });
