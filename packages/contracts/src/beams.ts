@@ -53,9 +53,15 @@ export type CreateBeamRequest = z.input<typeof createBeamRequestSchema>;
 export const renameBeamRequestSchema = z.object({ name: beamNameSchema });
 export type RenameBeamRequest = z.infer<typeof renameBeamRequestSchema>;
 
+/**
+ * A revision a client edited on top of. Versions are stored as 32-bit integers, and the next
+ * version must fit too: a larger number names no revision and is refused as invalid input.
+ */
+export const baseVersionSchema = z.number().int().positive().max(2_147_483_646, "baseVersion must be at most 2147483646");
+
 /** Save a new revision. `baseVersion` is the version the client edited; stale -> 409. */
 export const saveRevisionRequestSchema = z.object({
-  baseVersion: z.number().int().positive(),
+  baseVersion: baseVersionSchema,
   model: beamModelJsonSchema,
   changeSummary: changeSummarySchema.default(""),
 });

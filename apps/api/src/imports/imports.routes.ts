@@ -1,4 +1,4 @@
-import { apiRoutes, type BeamResponse, type LoadSchedulePreviewResponse, type RevisionResponse } from "@spanwright/contracts";
+import { apiRoutes, baseVersionSchema, type BeamResponse, type LoadSchedulePreviewResponse, type RevisionResponse } from "@spanwright/contracts";
 import type { RequestHandler, Router } from "express";
 import { z } from "zod";
 import { parseId } from "../access/access.js";
@@ -9,7 +9,7 @@ import { readUpload, uploadOne } from "./upload.js";
 
 // multipart text fields arrive as strings
 const importFieldsSchema = z.object({ name: z.string().trim().max(120).optional() });
-const applyFieldsSchema = z.object({ baseVersion: z.coerce.number().int().positive() });
+const applyFieldsSchema = z.object({ baseVersion: z.coerce.number().pipe(baseVersionSchema) });
 
 export function registerImportRoutes(router: Router, imports: ImportsService): void {
   /** Authorise before multer reads the body: callers without the right never upload anything. */

@@ -102,6 +102,15 @@ describe("revisions", () => {
     expect((await owner.client.get(`${base}/x`)).status).toBe(404);
   });
 
+  it("refuses a baseVersion beyond what a stored version can hold with 400 naming it", async () => {
+    const { owner, base, beamPath } = await beamWithTeam();
+    // 2^53 - 1 passed JSON and zod's int(); the database's integer column cannot hold it
+    const res = await owner.client.post(base, { baseVersion: Number.MAX_SAFE_INTEGER, model: {} });
+    expect(res.status).toBe(400);
+    expect(JSON.stringify(res.body.error)).toContain("baseVersion");
+    expect((await owner.client.get(beamPath)).body.beam.latestVersion).toBe(1);
+  });
+
   it("names baseVersion when it is missing", async () => {
     const { owner, base } = await beamWithTeam();
     const res = await owner.client.post(base, { model: twoSpanModel() });
