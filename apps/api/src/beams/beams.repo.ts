@@ -44,20 +44,6 @@ export async function deleteBeam(db: Db, beamId: string): Promise<void> {
   await db.delete(beams).where(eq(beams.id, beamId));
 }
 
-/**
- * The optimistic-concurrency step: moves `latest_version` from `baseVersion` to `baseVersion + 1`
- * only if it still is `baseVersion`. The row lock makes a concurrent save wait, then find the
- * version moved and get false: exactly one of two saves on the same base wins.
- */
-export async function advanceVersion(db: Db, beamId: string, baseVersion: number, now: Date): Promise<boolean> {
-  const rows = await db
-    .update(beams)
-    .set({ latestVersion: baseVersion + 1, updatedAt: now })
-    .where(and(eq(beams.id, beamId), eq(beams.latestVersion, baseVersion)))
-    .returning({ id: beams.id });
-  return rows.length > 0;
-}
-
 /** The beam's saved design settings as stored (validated when written); null when none. */
 export async function findDesignSettings(db: Db, beamId: string): Promise<unknown> {
   const [row] = await db.select({ designSettings: beams.designSettings }).from(beams).where(eq(beams.id, beamId));

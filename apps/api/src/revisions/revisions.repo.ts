@@ -1,7 +1,8 @@
 import { randomUUID } from "node:crypto";
-import { and, desc, eq } from "drizzle-orm";
+import { and, desc, eq, sql } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
 import type { Revision, RevisionSummary, UnitSystem } from "@spanwright/contracts";
+import type { AuditAction } from "../audit/audit.repo.js";
 import type { Db } from "../db/client.js";
 import { beamRevisions, beams, projects, revisionResults, users } from "../db/schema.js";
 
@@ -117,6 +118,42 @@ export async function insertRevisionWithResult(
     }),
     db.insert(revisionResults).values({ revisionId: id, result: values.result, createdAt: values.now }),
   ]);
+}
+
+/**
+ * The whole save in one statement, so in one round trip and all-or-nothing: bump the beam's
+ * version only if it is still `baseVersion`, and only then insert the revision, its result and the
+ * audit event. False when someone saved since (nothing written). Concurrent saves on the same base
+ * serialise on the beam's row lock; the loser's update then finds the version moved and matches
+ * nothing.
+ */
+export async function saveRevisionAtomically(
+  db: Db,
+  values: { projectId: string; beamId: string; baseVersion: number; model: unknown; result: unknown; authorId: string; changeSummary: string; now: Date },
+): Promise<boolean> {
+  const version = values.baseVersion + 1;
+  // parameters go as text with explicit casts: the driver sends them untyped
+  const now = values.now.toISOString();
+  const rows = await db.execute<{ saved: number }>(sql`
+    WITH advanced AS (
+      UPDATE beams SET latest_version = ${version}::int, updated_at = ${now}::timestamptz
+      WHERE id = ${values.beamId}::uuid AND latest_version = ${values.baseVersion}::int
+      RETURNING id
+    ), revision AS (
+      INSERT INTO beam_revisions (id, beam_id, version, model, author_id, change_summary, created_at)
+      SELECT ${randomUUID()}::uuid, id, ${version}::int, ${JSON.stringify(values.model)}::jsonb, ${values.authorId}::uuid, ${values.changeSummary}::text, ${now}::timestamptz
+      FROM advanced
+      RETURNING id
+    ), stored AS (
+      INSERT INTO revision_results (revision_id, result, created_at)
+      SELECT id, ${JSON.stringify(values.result)}::jsonb, ${now}::timestamptz FROM revision
+    ), audited AS (
+      INSERT INTO audit_events (project_id, actor_id, action, details)
+      SELECT ${values.projectId}::uuid, ${values.authorId}::uuid, ${"revision.saved" satisfies AuditAction}::text, ${JSON.stringify({ beamId: values.beamId, version })}::jsonb
+      FROM advanced
+    )
+    SELECT count(*)::int AS saved FROM advanced`);
+  return rows[0]?.saved === 1;
 }
 
 /** Marks a draft checked; false when it was no longer a draft (checked revisions are immutable). */

@@ -2,7 +2,6 @@ import type { CheckRevisionRequest, Revision, RevisionSummary, SaveRevisionReque
 import { authorize } from "../access/access.js";
 import { recordAudit } from "../audit/audit.repo.js";
 import type { BeamsService } from "../beams/beams.service.js";
-import { advanceVersion } from "../beams/beams.repo.js";
 import type { Clock } from "../clock.js";
 import { inTransaction, type Db } from "../db/client.js";
 import { AppError } from "../http/appError.js";
@@ -65,13 +64,15 @@ export function createRevisionsService(deps: { db: Db; clock: Clock; engine: Eng
       );
       const now = clock.now();
       const version = input.baseVersion + 1;
-      const saved = await inTransaction(db, async (tx) => {
-        if (!(await advanceVersion(tx, beamId, input.baseVersion, now))) return false;
-        await Promise.all([
-          repo.insertRevisionWithResult(tx, { beamId, version, model: input.model, result, authorId: actorId, changeSummary, now }),
-          recordAudit(tx, { projectId, actorId, action: "revision.saved", details: { beamId, version } }),
-        ]);
-        return true;
+      const saved = await repo.saveRevisionAtomically(db, {
+        projectId,
+        beamId,
+        baseVersion: input.baseVersion,
+        model: input.model,
+        result,
+        authorId: actorId,
+        changeSummary,
+        now,
       });
       if (!saved) {
         const latest = await beams.requireBeam(db, projectId, beamId);
