@@ -43,7 +43,7 @@ export function registerAuthRoutes(
   // public: the token is the proof, so the link also works in a browser that is not signed in
   router.post(apiRoutes.verifyEmail.path, authRateLimit, async (req, res) => {
     const { token } = parseRequest(verifyEmailRequestSchema, req.body);
-    res.json((await emailVerification.verify(token)) satisfies VerifyEmailResponse);
+    res.json((await auth.verifyEmail(token)) satisfies VerifyEmailResponse);
   });
 
   router.post(apiRoutes.resendVerification.path, authRateLimit, async (_req, res) => {

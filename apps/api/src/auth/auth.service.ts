@@ -5,6 +5,7 @@ import { recordAudit } from "../audit/audit.repo.js";
 import { AppError } from "../http/appError.js";
 import { isUniqueViolation } from "../http/dbErrors.js";
 import * as repo from "./auth.repo.js";
+import { createSessionCache } from "./sessionCache.js";
 import { burnPasswordCheck, hashPassword, verifyPassword } from "./password.js";
 import type { EmailVerificationService } from "./emailVerification.js";
 import { generateSessionToken, sessionExpiry, sessionIdFromToken, sessionState } from "./sessionToken.js";
@@ -23,10 +24,14 @@ export interface Authenticated {
   renewedUntil: Date | null;
 }
 
+/** How long a session lookup is reused in this process (sessionCache.ts). */
+export const SESSION_CACHE_TTL_MS = 5000;
+
 const toUser = (u: repo.UserRecord): User => ({ id: u.id, email: u.email, name: u.name, emailVerified: u.emailVerifiedAt !== null });
 
 export function createAuthService(deps: { db: Db; clock: Clock; emailVerification: EmailVerificationService }) {
   const { db, clock, emailVerification } = deps;
+  const sessions = createSessionCache({ ttlMs: SESSION_CACHE_TTL_MS, maxEntries: 10_000 });
 
   async function issueSession(userId: string, tx: Db = db): Promise<IssuedSession> {
     const token = generateSessionToken();
@@ -95,31 +100,53 @@ export function createAuthService(deps: { db: Db; clock: Clock; emailVerificatio
       if (!(await verifyPassword(found.passwordHash, input.password))) {
         throw new AppError("invalid-credentials", "wrong e-mail or password");
       }
-      if (presentedToken) await repo.deleteSession(db, sessionIdFromToken(presentedToken));
+      if (presentedToken) {
+        const presented = sessionIdFromToken(presentedToken);
+        await repo.deleteSession(db, presented);
+        sessions.forgetSession(presented);
+      }
       return { user: toUser(found), session: await issueSession(found.id) };
     },
 
     async signOut(token: string): Promise<void> {
-      await repo.deleteSession(db, sessionIdFromToken(token));
+      const sessionId = sessionIdFromToken(token);
+      await repo.deleteSession(db, sessionId);
+      sessions.forgetSession(sessionId);
+    },
+
+    /** Verifies an address by its mailed token; the user's cached sessions still say unverified. */
+    async verifyEmail(token: string): Promise<{ email: string }> {
+      const verified = await emailVerification.verify(token);
+      // the token names no user here; verifications are rare, so every cached lookup goes
+      sessions.clear();
+      return verified;
     },
 
     /** The user behind a cookie, sliding the expiry when due; null when unknown or expired. */
     async authenticate(token: string): Promise<Authenticated | null> {
       const sessionId = sessionIdFromToken(token);
-      const found = await repo.findSessionWithUser(db, sessionId);
-      if (!found) return null;
       const now = clock.now();
-      const state = sessionState(found.session.expiresAt, now);
+      let found = sessions.get(sessionId, now.getTime());
+      if (!found) {
+        const generation = sessions.generation();
+        const row = await repo.findSessionWithUser(db, sessionId);
+        if (!row) return null;
+        found = { user: toUser(row.user), userId: row.user.id, expiresAt: row.session.expiresAt };
+        sessions.set(sessionId, found, now.getTime(), generation);
+      }
+      const state = sessionState(found.expiresAt, now);
       if (state === "expired") {
         await repo.deleteSession(db, sessionId);
+        sessions.forgetSession(sessionId);
         return null;
       }
       let renewedUntil: Date | null = null;
       if (state === "renew") {
         renewedUntil = sessionExpiry(now);
         await repo.updateSessionExpiry(db, sessionId, renewedUntil);
+        sessions.set(sessionId, { ...found, expiresAt: renewedUntil }, now.getTime(), sessions.generation());
       }
-      return { user: toUser(found.user), sessionId, renewedUntil };
+      return { user: found.user, sessionId, renewedUntil };
     },
 
     /** Changes the password and ends every other session of the user (a stolen cookie stops working). */
@@ -134,6 +161,7 @@ export function createAuthService(deps: { db: Db; clock: Clock; emailVerificatio
         await repo.deleteOtherSessions(tx, userId, sessionId);
         await recordAudit(tx, { projectId: null, actorId: userId, action: "user.password-changed" });
       });
+      sessions.forgetUser(userId);
     },
   };
 }
