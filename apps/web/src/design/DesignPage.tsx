@@ -19,8 +19,7 @@ import type { UnitSystemId } from "../editor/units/unitSystems";
 import { carryChoices, choicesFromSettings, settingsOf } from "./checkChoices";
 import { ChecksPanel } from "./ChecksPanel";
 import { CombinationGenerator } from "./CombinationGenerator";
-import { DesignSettingsBar } from "./DesignSettingsBar";
-import { reportPdfUrl, useSaveDesignSettings } from "./designSettingsApi";
+import { BeamDesignSettingsBar } from "./DesignSettingsBar";
 import { MaterialPicker } from "./MaterialPicker";
 import { SectionAtX } from "./SectionAtX";
 import { SectionEditor } from "./SectionEditor";
@@ -90,7 +89,6 @@ function DesignWorkspace({ ids, model, result, units, saved, sections, canEdit }
   const [added, setAdded] = useState<readonly GeneratedCombination[]>([]);
   // The choices and the model they were made on: generated combinations restart the checks, which carry them over.
   const [made, setMade] = useState(() => ({ choices: choicesFromSettings(saved, model), model }));
-  const save = useSaveDesignSettings(ids.projectId, ids.beamId);
   const theory = model.theory ?? "euler-bernoulli";
 
   // Generated combinations join the saved ones on this page only; the editor's table keeps the beam's own.
@@ -151,15 +149,7 @@ function DesignWorkspace({ ids, model, result, units, saved, sections, canEdit }
           onChoicesChange={(next) => setMade({ choices: next, model: designModel })}
           readOnly={!canEdit}
           footer={
-            <DesignSettingsBar
-              draft={draft}
-              saved={saved}
-              canEdit={canEdit}
-              saving={save.isPending}
-              error={save.error}
-              onSave={(settings) => save.mutate(settings)}
-              reportHref={reportPdfUrl(ids.projectId, ids.beamId, ids.version)}
-            />
+            <BeamDesignSettingsBar ids={ids} draft={draft} saved={saved} canEdit={canEdit} />
           }
         />
       </Card>

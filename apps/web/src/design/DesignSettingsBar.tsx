@@ -3,6 +3,7 @@ import { isApiError } from "../api/client";
 import { Alert } from "../components/Alert";
 import { Button } from "../components/Button";
 import { sameSettings, type SettingsDraft } from "./checkChoices";
+import { reportPdfUrl, useSaveDesignSettings } from "./designSettingsApi";
 
 export interface DesignSettingsBarProps {
   /** What the page shows now, as settings to save. */
@@ -66,5 +67,26 @@ export function DesignSettingsBar({ draft, saved, canEdit, saving, error, onSave
           </a>
         ))}
     </div>
+  );
+}
+
+/** The bar wired to the beam: saves through the API, links the report of revision `ids.version`. */
+export function BeamDesignSettingsBar({ ids, draft, saved, canEdit }: {
+  readonly ids: { readonly projectId: string; readonly beamId: string; readonly version: number };
+  readonly draft: SettingsDraft;
+  readonly saved: BeamDesignSettings | null;
+  readonly canEdit: boolean;
+}) {
+  const save = useSaveDesignSettings(ids.projectId, ids.beamId);
+  return (
+    <DesignSettingsBar
+      draft={draft}
+      saved={saved}
+      canEdit={canEdit}
+      saving={save.isPending}
+      error={save.error}
+      onSave={(settings) => save.mutate(settings)}
+      reportHref={reportPdfUrl(ids.projectId, ids.beamId, ids.version)}
+    />
   );
 }

@@ -9,8 +9,7 @@ import { useSections } from "../../api/sections";
 import { ChecksPanel, stationsForChecks } from "../../design";
 import { carryChoices, choicesFromSettings, sameValue, settingsOf } from "../../design/checkChoices";
 import type { DesignModel } from "../../design/designModel";
-import { DesignSettingsBar } from "../../design/DesignSettingsBar";
-import { reportPdfUrl, useSaveDesignSettings } from "../../design/designSettingsApi";
+import { BeamDesignSettingsBar } from "../../design/DesignSettingsBar";
 import { materialToSave, sectionChoiceOf, startingSection, type SectionSource } from "../../design/SectionSourcePicker";
 import type { BeamDocument } from "../model/BeamDocument";
 import { toExchange } from "../model/exchange";
@@ -96,7 +95,6 @@ function SavedSettingsChecks({ ids, inputs, saved, sections, canEdit }: SavedSet
   const { doc, model } = inputs;
   // The choices and the model they were made on, so a change of cases or combinations can carry them over.
   const [made, setMade] = useState(() => ({ choices: choicesFromSettings(saved, model), model }));
-  const save = useSaveDesignSettings(ids.projectId, ids.beamId);
   const checked = checkedSection(doc, inputs.segmentId, saved, sections);
   if (!checked) return <NoSection missingSaved={saved?.section?.source === "project"} />;
   const draft = settingsOf(sectionChoiceOf(checked.source, checked.shape), materialToSave(checked.source, checked.material, sections), made.choices, model);
@@ -115,15 +113,7 @@ function SavedSettingsChecks({ ids, inputs, saved, sections, canEdit }: SavedSet
         readOnly={!canEdit}
         footer={
           <div className="space-y-1">
-            <DesignSettingsBar
-              draft={draft}
-              saved={saved}
-              canEdit={canEdit}
-              saving={save.isPending}
-              error={save.error}
-              onSave={(settings) => save.mutate(settings)}
-              reportHref={reportPdfUrl(ids.projectId, ids.beamId, ids.version)}
-            />
+            <BeamDesignSettingsBar ids={ids} draft={draft} saved={saved} canEdit={canEdit} />
             {saved !== null && (
               <p className="text-xs text-paper-600">The report prints revision {ids.version}, the last one saved; edits not yet saved in the editor are not in it.</p>
             )}
