@@ -1,12 +1,12 @@
 import fs from "node:fs";
 import os from "node:os";
 import type { Server } from "node:http";
-import net, { type AddressInfo } from "node:net";
 import path from "node:path";
 import { fileURLToPath } from "node:url";
 import { chromium, type Browser, type BrowserContext, type Page } from "playwright-core";
 import { onTestFailed } from "vitest";
 import { createTestApp, type Client, type TestApp } from "@spanwright/api/testing";
+import { freePort } from "../freePort";
 
 /*
  * One real-browser environment per test file: a fresh database copied from the run's template, the
@@ -60,17 +60,6 @@ export interface E2eEnvironment {
   close(): Promise<void>;
 }
 
-/** A port the OS has just handed out on 127.0.0.1 (free again once this returns). */
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const probe = net.createServer();
-    probe.once("error", reject);
-    probe.listen(0, "127.0.0.1", () => {
-      const { port } = probe.address() as AddressInfo;
-      probe.close(() => resolve(port));
-    });
-  });
-}
 
 function listen(testApp: TestApp, port: number): Promise<Server> {
   return new Promise((resolve, reject) => {

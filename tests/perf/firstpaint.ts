@@ -27,12 +27,12 @@
  */
 import { execFileSync, spawn, type ChildProcess } from "node:child_process";
 import fs from "node:fs";
-import net, { type AddressInfo } from "node:net";
 import os from "node:os";
 import path from "node:path";
 import { fileURLToPath } from "node:url";
 import zlib from "node:zlib";
 import { chromium, type Browser } from "playwright-core";
+import { freePort } from "../freePort";
 
 const here = path.dirname(fileURLToPath(import.meta.url));
 const root = path.resolve(here, "../..");
@@ -124,16 +124,6 @@ function dbIsRunning(): boolean {
   }
 }
 
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const probeServer = net.createServer();
-    probeServer.once("error", reject);
-    probeServer.listen(0, "127.0.0.1", () => {
-      const { port } = probeServer.address() as AddressInfo;
-      probeServer.close(() => resolve(port));
-    });
-  });
-}
 
 /** A copy of a build without source maps (others may rebuild apps/web/dist meanwhile). */
 function snapshotDist(dir: string): string {

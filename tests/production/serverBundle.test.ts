@@ -1,12 +1,12 @@
 import { execFile, spawn, type ChildProcess } from "node:child_process";
 import { once } from "node:events";
-import net, { type AddressInfo } from "node:net";
 import path from "node:path";
 import { fileURLToPath } from "node:url";
 import { promisify } from "node:util";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { inject } from "vitest";
 import { createTestDatabase, type TestDatabase } from "@spanwright/api/testing";
+import { freePort } from "../freePort";
 
 /*
  * `npm start` and `pnpm loadtest` run the API as bundled by apps/api/build.mjs (dist/main.mjs and the
@@ -22,13 +22,6 @@ let server: ChildProcess;
 let baseUrl: string;
 let log = "";
 
-async function freePort(): Promise<number> {
-  const probe = net.createServer().listen(0, "127.0.0.1");
-  await once(probe, "listening");
-  const { port } = probe.address() as AddressInfo;
-  await new Promise((resolve) => probe.close(resolve));
-  return port;
-}
 
 beforeAll(async () => {
   await promisify(execFile)(process.execPath, ["build.mjs"], { cwd: apiDir });
