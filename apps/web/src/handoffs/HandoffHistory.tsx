@@ -2,6 +2,7 @@ import { Link } from "react-router";
 import type { Handoff } from "@spanwright/contracts";
 import { formatDate } from "../formatDate";
 import { hasOutdatedRecipients, isRecipientOutdated } from "./staleHandoffs";
+import { TableHead } from "../components/TableHead";
 
 /** Who issued which revision to whom, and when; newest first as the API sends it. */
 export function HandoffHistory({ handoffs, showBeam = false }: { handoffs: readonly Handoff[]; showBeam?: boolean }) {
@@ -9,16 +10,7 @@ export function HandoffHistory({ handoffs, showBeam = false }: { handoffs: reado
   return (
     <div className="overflow-x-auto">
       <table className="w-full text-left text-sm">
-        <thead className="border-b border-paper-200 text-xs uppercase tracking-wide text-paper-600">
-          <tr>
-            <th scope="col" className="py-2 pr-3 font-medium">When</th>
-            {showBeam && <th scope="col" className="py-2 pr-3 font-medium">Beam</th>}
-            <th scope="col" className="py-2 pr-3 font-medium">Revision</th>
-            <th scope="col" className="py-2 pr-3 font-medium">Issued by</th>
-            <th scope="col" className="py-2 pr-3 font-medium">To</th>
-            <th scope="col" className="py-2 pr-3 font-medium">Message id</th>
-          </tr>
-        </thead>
+        <TableHead columns={["When", showBeam && "Beam", "Revision", "Issued by", "To", "Message id"]} />
         <tbody>
           {handoffs.map((h) => (
             <tr key={h.id} className="border-b border-paper-100 align-top last:border-0">

@@ -5,6 +5,7 @@ import { useApplyLoadSchedule, usePreviewLoadSchedule } from "../api/imports";
 import { Alert } from "../components/Alert";
 import { Button } from "../components/Button";
 import { describeScheduleLoad } from "./describeScheduleLoad";
+import { TableHead } from "../components/TableHead";
 
 /** Errors sorted by line, whole-file problems (row 0) first, as a person fixes a spreadsheet. */
 export function sortScheduleErrors(errors: readonly ScheduleErrorJson[]): ScheduleErrorJson[] {
@@ -90,13 +91,7 @@ export function LoadScheduleImport({
           <Alert tone="error" title={`${errors.length} problem${errors.length === 1 ? "" : "s"} in the file; nothing can be applied until they are fixed`} />
           <table className="mt-2 w-full text-left">
             <caption className="sr-only">Problems by line</caption>
-            <thead className="border-b border-paper-200 text-xs uppercase tracking-wide text-paper-600">
-              <tr>
-                <th scope="col" className="py-1.5 pr-3 font-medium">Line</th>
-                <th scope="col" className="py-1.5 pr-3 font-medium">Column</th>
-                <th scope="col" className="py-1.5 font-medium">Problem</th>
-              </tr>
-            </thead>
+            <TableHead compact columns={["Line", "Column", "Problem"]} />
             <tbody>
               {errors.map((e, i) => (
                 <tr key={`${e.row}-${e.column ?? ""}-${i}`} className="border-b border-paper-100 text-danger-700 last:border-0">
@@ -112,13 +107,7 @@ export function LoadScheduleImport({
       {result !== undefined && result.preview.rows.length > 0 && (
         <table className="w-full text-left">
           <caption className="mb-1 text-left font-medium text-ink-800">Loads to add</caption>
-          <thead className="border-b border-paper-200 text-xs uppercase tracking-wide text-paper-600">
-            <tr>
-              <th scope="col" className="py-1.5 pr-3 font-medium">Line</th>
-              <th scope="col" className="py-1.5 pr-3 font-medium">Case</th>
-              <th scope="col" className="py-1.5 font-medium">Load</th>
-            </tr>
-          </thead>
+          <TableHead compact columns={["Line", "Case", "Load"]} />
           <tbody>
             {result.preview.rows.map((r) => {
               const created = result.preview.cases.find((c) => c.id === r.caseId)?.willCreate === true;

@@ -5,6 +5,7 @@ import { formatDate } from "../formatDate";
 import { CheckRevisionForm } from "./CheckRevisionForm";
 import { DownloadLinks } from "./DownloadLinks";
 import { RevisionStatusBadge } from "./RevisionStatusBadge";
+import { TableHead } from "../components/TableHead";
 
 /** Every saved revision of a beam, newest first, with what each role may do to it. */
 export function RevisionList({
@@ -25,16 +26,7 @@ export function RevisionList({
   return (
     <div className="overflow-x-auto">
       <table className="w-full text-left text-sm">
-        <thead className="border-b border-paper-200 text-xs uppercase tracking-wide text-paper-600">
-          <tr>
-            <th scope="col" className="py-2 pr-3 font-medium">Revision</th>
-            <th scope="col" className="py-2 pr-3 font-medium">Status</th>
-            <th scope="col" className="py-2 pr-3 font-medium">Author</th>
-            <th scope="col" className="py-2 pr-3 font-medium">Saved</th>
-            <th scope="col" className="py-2 pr-3 font-medium">Changes</th>
-            <th scope="col" className="py-2 font-medium">Actions</th>
-          </tr>
-        </thead>
+        <TableHead columns={["Revision", "Status", "Author", "Saved", "Changes", "Actions"]} />
         <tbody>
           {sorted.map((r) => (
             <tr key={r.version} className="border-b border-paper-100 align-top last:border-0">

@@ -6,6 +6,7 @@ import { SelectField } from "../../components/SelectField";
 import { formatDate } from "../../formatDate";
 import { roleLabels, roleOptions } from "../../roleLabels";
 import { describeMemberError } from "./memberErrors";
+import { TableHead } from "../../components/TableHead";
 
 export function MembersTable({
   projectId,
@@ -32,15 +33,7 @@ export function MembersTable({
         </div>
       )}
       <table className="w-full text-left text-sm">
-        <thead className="border-b border-paper-200 text-xs uppercase tracking-wide text-paper-600">
-          <tr>
-            <th scope="col" className="py-2 pr-3 font-medium">Name</th>
-            <th scope="col" className="py-2 pr-3 font-medium">E-mail</th>
-            <th scope="col" className="py-2 pr-3 font-medium">Role</th>
-            <th scope="col" className="py-2 pr-3 font-medium">Added</th>
-            {canManage && <th scope="col" className="py-2 font-medium"><span className="sr-only">Actions</span></th>}
-          </tr>
-        </thead>
+        <TableHead columns={["Name", "E-mail", "Role", "Added", canManage && { label: "Actions", hidden: true }]} />
         <tbody>
           {members.map((m) => {
             const isMe = m.userId === currentUserId;

@@ -9,6 +9,7 @@ import { Loading, QueryError } from "../../components/QueryState";
 import { formatDate } from "../../formatDate";
 import { CreateBeamForm } from "./CreateBeamForm";
 import { ImportBeamForm } from "./ImportBeamForm";
+import { TableHead } from "../../components/TableHead";
 
 export function BeamsSection({ project }: { project: Project }) {
   const beams = useBeams(project.id);
@@ -36,14 +37,7 @@ export function BeamsSection({ project }: { project: Project }) {
       )}
       {beams.isSuccess && beams.data.length > 0 && (
         <table className="w-full text-left text-sm">
-          <thead className="border-b border-paper-200 text-xs uppercase tracking-wide text-paper-600">
-            <tr>
-              <th scope="col" className="py-2 pr-3 font-medium">Beam</th>
-              <th scope="col" className="py-2 pr-3 font-medium">Revision</th>
-              <th scope="col" className="py-2 pr-3 font-medium">Updated</th>
-              {canEdit && <th scope="col" className="py-2 font-medium"><span className="sr-only">Actions</span></th>}
-            </tr>
-          </thead>
+          <TableHead columns={["Beam", "Revision", "Updated", canEdit && { label: "Actions", hidden: true }]} />
           <tbody>
             {beams.data.map((beam) => (
               <tr key={beam.id} className="border-b border-paper-100 last:border-0">
