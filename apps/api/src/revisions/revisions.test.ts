@@ -29,7 +29,8 @@ describe("revisions", () => {
       changeSummary: "heavier partition: D: -10 kN/m -> -20 kN/m on spans 1-2 (x = 0..10 m)",
       status: "draft",
     });
-    // twice the load, twice the reaction (linear elastic)
+    // two equal 5 m spans: end reaction 3wL/8 (AISC Manual Table 3-23, two equal spans, uniform load);
+    // twice the load, twice the reaction
     expect(res.body.revision.result.results.D.reactions[0].fy).toBeCloseTo(37_500, 6);
     // the save's answer is built from what was written: a read of the revision gives the same
     expect((await owner.client.get(`${base}/2`)).body.revision).toEqual(res.body.revision);

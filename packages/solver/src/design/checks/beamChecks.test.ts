@@ -80,6 +80,7 @@ describe("assembleBeamChecks", () => {
     const hogging = simpleSpan(-36e3);
     const rows = assembleBeamChecks(input({ shape: rectangle, strength: [{ id: "C1", stations: hogging }] })).rows;
     const M = rows[0]!.check.inputs.find((i) => i.symbol === "M")!.value;
+    // wL²/8 = 36 kN/m × (6 m)² / 8 (simple span, uniform load: AISC Manual Table 3-23, case 1)
     expect(M).toBeCloseTo(-162e3, 0);
     expect(rows[0]!.check.inputs.find((i) => i.symbol === "σtop")!.value).toBeGreaterThan(0);
   });
