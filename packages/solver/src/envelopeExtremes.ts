@@ -36,35 +36,51 @@ export function prepareEnvelopeExtremes(analysis: Analysis): EnvelopeExtremesCon
       for (let k = 0; k + 1 < grid.length; k++) {
         const h = grid[k + 1]! - grid[k]!;
         const o = k * COEFFICIENTS_PER_INTERVAL + offset;
-        const cuts = [0, h];
-        // Pieces that keep their sign on the interval go to one side once; only the others
-        // are classified on each sub-interval between sign changes.
-        const fixedPositive = new Float64Array(n);
-        const fixedNegative = new Float64Array(n);
+        // Pieces that keep their sign on the interval go to one side once. Each other piece starts
+        // on the side of its sign left of its first root and changes side at each of its roots (all
+        // sign changes): no evaluation near a root, where the sign is rounding noise.
+        const positiveSum = new Float64Array(n);
+        const negativeSum = new Float64Array(n);
         const changing: Float64Array[] = [];
+        const sides: number[] = [];
+        const roots: number[] = [];
+        const owners: number[] = [];
         for (const piece of loadCase.pieces) {
           const coef = piece.curve.coef;
           if (keepsSign(coef, o, degree, h)) {
-            const target = coef[o]! > 0 ? fixedPositive : fixedNegative;
+            const target = coef[o]! > 0 ? positiveSum : negativeSum;
             for (let i = 0; i < n; i++) target[i]! += coef[o + i]!;
             continue;
           }
+          const own = findSignChanges(coef, o, degree, 0, h);
+          const side = initialSide(coef, o, degree, h, own);
+          const target = side > 0 ? positiveSum : negativeSum;
+          for (let i = 0; i < n; i++) target[i]! += coef[o + i]!;
+          for (const root of own) {
+            roots.push(root);
+            owners.push(changing.length);
+          }
           changing.push(coef);
-          for (const root of findSignChanges(coef, o, degree, 0, h)) cuts.push(root);
+          sides.push(side);
         }
-        cuts.sort((a, b) => a - b);
+        const order = roots.map((_, i) => i).sort((i, j) => roots[i]! - roots[j]! || i - j);
+        const cuts = [0, ...order.map((i) => roots[i]!), h];
         const subs = cuts.length - 1;
         const positive = new Float64Array(subs * n);
         const negative = new Float64Array(subs * n);
-        for (let s = 0; s < subs; s++) {
-          positive.set(fixedPositive, s * n);
-          negative.set(fixedNegative, s * n);
-          const mid = 0.5 * (cuts[s]! + cuts[s + 1]!);
-          for (const coef of changing) {
-            const v = evaluatePolynomial(coef, o, degree, mid);
-            const target = v > 0 ? positive : negative;
-            for (let i = 0; i < n; i++) target[s * n + i]! += coef[o + i]!;
+        positive.set(positiveSum, 0);
+        negative.set(negativeSum, 0);
+        for (let s = 1; s < subs; s++) {
+          const p = owners[order[s - 1]!]!;
+          const coef = changing[p]!;
+          const [from, to] = sides[p]! > 0 ? [positiveSum, negativeSum] : [negativeSum, positiveSum];
+          for (let i = 0; i < n; i++) {
+            from[i]! -= coef[o + i]!;
+            to[i]! += coef[o + i]!;
           }
+          sides[p] = -sides[p]!;
+          positive.set(positiveSum, s * n);
+          negative.set(negativeSum, s * n);
         }
         perInterval.push({ cuts, positive, negative });
       }
@@ -82,6 +98,22 @@ export function prepareEnvelopeExtremes(analysis: Analysis): EnvelopeExtremesCon
     ends[quantity] = values;
   }
   return { analysis, splits, ends };
+}
+
+/**
+ * The sign (+1, −1) of a polynomial on [0, h] left of its first sign change, read at the middle of
+ * the widest stretch between its sign changes (`roots`, ascending) and carried back across them.
+ */
+function initialSide(coef: Float64Array, o: number, degree: number, h: number, roots: number[]): number {
+  let widest = 0;
+  let width = -1;
+  for (let j = 0; j <= roots.length; j++) {
+    const w = (j < roots.length ? roots[j]! : h) - (j > 0 ? roots[j - 1]! : 0);
+    if (w > width) [widest, width] = [j, w];
+  }
+  const a = widest > 0 ? roots[widest - 1]! : 0;
+  const sign = evaluatePolynomial(coef, o, degree, a + 0.5 * width) > 0 ? 1 : -1;
+  return widest % 2 === 0 ? sign : -sign;
 }
 
 /**
@@ -107,16 +139,33 @@ class Tracker {
 /**
  * Exact extremes of the upper (max) and lower (min) envelopes of a list of factored sums: on each
  * sub-interval where no piece changes sign the envelopes are polynomials, whose extremes lie at
- * the sub-interval ends or at sign changes of their derivatives.
+ * the sub-interval ends or at sign changes of their derivatives. `peaks`, the best sampled values
+ * of the same envelope, only speed the search up (see `seedWithSamples`).
  */
-export function envelopeExtremesOf(context: EnvelopeExtremesContext, sets: FactorSet[]): Extremes {
-  const out = {} as Record<EnvelopeQuantity, Tracker>;
+export function envelopeExtremesOf(context: EnvelopeExtremesContext, sets: FactorSet[], peaks?: Float64Array): Extremes {
+  const out = { V: new Tracker(), M: new Tracker(), uy: new Tracker() };
+  if (peaks) seedWithSamples(out, peaks);
   for (const quantity of ENVELOPE_QUANTITIES) {
-    const tracker = new Tracker();
-    for (const factors of sets) visitFactorSet(context, factors, quantity, tracker);
-    out[quantity] = tracker;
+    for (const factors of sets) visitFactorSet(context, factors, quantity, out[quantity]);
   }
   return { Mmax: out.M.max, Mmin: out.M.min, Vmax: out.V.max, Vmin: out.V.min, uyMax: out.uy.max, uyMin: out.uy.min };
+}
+
+/**
+ * Starts the trackers just below the best sampled values of the same envelope (`peaks`: Vmax, Vmin,
+ * Mmax, Mmin, uyMax, uyMin, then their x, as `envelopeStationRows` writes them), so the bounds in
+ * `visitFactorSet` skip nearly every sub-interval that cannot hold the extreme. The start sits a
+ * hair (1e-9 of the scale) inside the samples, so the exact search always replaces it: the extreme
+ * and its x come from the polynomials, never from a sample.
+ */
+function seedWithSamples(trackers: Record<EnvelopeQuantity, Tracker>, peaks: Float64Array): void {
+  ENVELOPE_QUANTITIES.forEach((quantity, q) => {
+    const [max, min] = [peaks[2 * q]!, peaks[2 * q + 1]!];
+    if (!(max >= min)) return; // no samples
+    const margin = 1e-9 * Math.max(Math.abs(max), Math.abs(min)) + Number.MIN_VALUE;
+    trackers[quantity].max = { value: max - margin, x: peaks[6 + 2 * q]! };
+    trackers[quantity].min = { value: min + margin, x: peaks[7 + 2 * q]! };
+  });
 }
 
 /** Exact envelope extremes for a combination id, a load case id or "*" (undefined if unknown). */

@@ -14,6 +14,17 @@ function differentiate(coef: ArrayLike<number>, offset: number, degree: number, 
 }
 
 /**
+ * One work array per derivative degree, reused: the recursion below reads a degree-d polynomial
+ * and writes its derivative into the degree-(d − 1) array, so no two live calls share one. This
+ * runs for every pattern piece on every interval, where allocating typed arrays cost more than
+ * the arithmetic.
+ */
+const scratch: Float64Array[] = [];
+function derivativeScratch(length: number): Float64Array {
+  return (scratch[length] ??= new Float64Array(length));
+}
+
+/**
  * The real roots strictly inside (lo, hi) where the polynomial changes sign, ascending.
  * Isolation by recursion on the derivative (between consecutive critical points the polynomial
  * is monotone, so each sign change holds exactly one root), then safeguarded regula falsi
@@ -29,7 +40,7 @@ export function findSignChanges(coef: ArrayLike<number>, offset: number, degree:
     return root > lo && root < hi ? [root] : [];
   }
   if (d === 2) return quadraticSignChanges(coef[offset]!, coef[offset + 1]!, coef[offset + 2]!, lo, hi);
-  const derivative = new Float64Array(d);
+  const derivative = derivativeScratch(d);
   differentiate(coef, offset, d, derivative);
   const critical = findSignChanges(derivative, 0, d - 1, lo, hi);
   const roots: number[] = [];

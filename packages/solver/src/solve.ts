@@ -54,13 +54,14 @@ function envelopeResults(analysis: Analysis, places: StationPlaces, ids: string[
   if (ids.length === 0) return {};
   const context: EnvelopeExtremesContext = prepareEnvelopeExtremes(analysis);
   // envelopeStationRows gives the combinations in order, then "*": the order of ids.
-  const stations = envelopeStationRows(analysis, places, context);
+  const peaks = new Float64Array(12 * analysis.combinations.length);
+  const stations = envelopeStationRows(analysis, places, context, peaks);
   const out: Record<string, EnvelopeResult> = {};
   const perCombination = new Map<string, EnvelopeResult>();
   ids.forEach((id, i) => {
     const sets = envelopeFactorSets(analysis, id)!;
     // "*" reuses the extremes of the combinations: the worst of the worst.
-    const extremes = id === "*" ? worstOf([...perCombination.values()].map((e) => e.extremes)) : envelopeExtremesOf(context, sets);
+    const extremes = id === "*" ? worstOf([...perCombination.values()].map((e) => e.extremes)) : envelopeExtremesOf(context, sets, peaks.subarray(12 * i, 12 * i + 12));
     const result = { reactions: reactionEnvelope(analysis, id)!, stations: stations[i]!, extremes };
     if (id !== "*") perCombination.set(id, result);
     out[id] = result;

@@ -84,6 +84,8 @@ class EnvelopeRow implements EnvelopeStationRow {
   ) {}
 }
 
+const EMPTY_PEAKS = [-Infinity, Infinity, -Infinity, Infinity, -Infinity, Infinity, 0, 0, 0, 0, 0, 0];
+
 /** V, M, uy, rz of one curve at every station (Horner inlined: 16 curves × every station). */
 export function curveStationRows(places: StationPlaces, curve: Curve): StationRow[] {
   const c = curve.coef;
@@ -109,82 +111,100 @@ export function curveStationRows(places: StationPlaces, curve: Curve): StationRo
 }
 
 /**
- * Envelope rows of every combination and of "*" (last), at every station. The case parts at a
- * station are evaluated once and shared by every combination; "*" is the worst of the
- * combination rows, which is its definition.
+ * Envelope rows of every combination and of "*" (last), at every station, from each combination's
+ * own value (its curve: every case at full value). A combination's envelope
+ * differs from its own value only by its patterned cases: for each, the value holds f·(positive +
+ * negative) where the worst arrangement holds only the adverse part, so max = value − Σ min(f·positive,
+ * f·negative) and min = value − Σ max(…). The parts of the patterned cases are evaluated once per
+ * station and shared by every combination; "*" is the worst of the combination rows, which is its
+ * definition. With `peaks` (12 numbers per combination), also writes each combination's best
+ * sampled Vmax, Vmin, Mmax, Mmin, uyMax, uyMin and then their x (the seeds of `envelopeExtremesOf`).
  */
-export function envelopeStationRows(analysis: Analysis, places: StationPlaces, context: EnvelopeExtremesContext = prepareEnvelopeExtremes(analysis)): EnvelopeStationRow[][] {
+export function envelopeStationRows(
+  analysis: Analysis,
+  places: StationPlaces,
+  context: EnvelopeExtremesContext = prepareEnvelopeExtremes(analysis),
+  peaks?: Float64Array,
+): EnvelopeStationRow[][] {
+  if (peaks) for (let p = 0; p + 12 <= peaks.length; p += 12) peaks.set(EMPTY_PEAKS, p);
   const nc = analysis.cases.length;
   const combos = analysis.combinations;
+  // per combination, only its patterned factors: [case index, factor] pairs
   const starts = new Int32Array(combos.length + 1);
-  combos.forEach((c, i) => (starts[i + 1] = starts[i]! + c.factors.length));
+  const patternedFactors = combos.map((c) => c.factors.filter((f) => f.factor !== 0 && analysis.cases[f.caseIndex]!.pattern));
+  patternedFactors.forEach((list, i) => (starts[i + 1] = starts[i]! + list.length));
   const caseIndex = new Int32Array(starts[combos.length]!);
   const factor = new Float64Array(starts[combos.length]!);
-  combos.forEach((c, i) => c.factors.forEach((f, j) => ((caseIndex[starts[i]! + j] = f.caseIndex), (factor[starts[i]! + j] = f.factor))));
-  const parts = new Float64Array(9 * nc);
-  const partsV = parts.subarray(0, 3 * nc);
-  const partsM = parts.subarray(3 * nc, 6 * nc);
-  const partsUy = parts.subarray(6 * nc, 9 * nc);
+  patternedFactors.forEach((list, i) => list.forEach((f, j) => ((caseIndex[starts[i]! + j] = f.caseIndex), (factor[starts[i]! + j] = f.factor))));
+  const patternedCases = analysis.cases.flatMap((c, i) => (c.pattern ? [i] : []));
+  const parts = new Float64Array(6 * nc);
   const n = places.x.length;
   const [stride, vAt, mAt, yAt] = LAYOUT;
+  const coefs = combos.map((c) => c.curve.coef);
   const rows: EnvelopeStationRow[][] = Array.from({ length: combos.length + 1 }, () => new Array(n));
+  const { splits } = context;
   for (let s = 0; s < n; s++) {
     const k = places.k[s]!;
     const u = places.u[s]!;
-    evaluateSplitParts(analysis, context.splits.V, k * stride + vAt, k, u, 2, partsV);
-    evaluateSplitParts(analysis, context.splits.M, k * stride + mAt, k, u, 3, partsM);
-    evaluateSplitParts(analysis, context.splits.uy, k * stride + yAt, k, u, 5, partsUy);
-    const x = places.x[s]!;
-    const star = new EnvelopeRow(x, -Infinity, Infinity, -Infinity, Infinity, -Infinity, Infinity);
-    for (let c = 0; c < combos.length; c++) {
-      // [max, min] of each factored sum: patterned cases add only their adverse pieces.
-      let vMax = 0;
-      let vMin = 0;
-      let mMax = 0;
-      let mMin = 0;
-      let yMax = 0;
-      let yMin = 0;
-      for (let j = starts[c]!; j < starts[c + 1]!; j++) {
-        const at = 3 * caseIndex[j]!;
-        const f = factor[j]!;
-        let positive = f * partsV[at + 1]!;
-        let negative = f * partsV[at + 2]!;
-        if (positive >= negative) {
-          vMax += positive;
-          vMin += negative;
-        } else {
-          vMax += negative;
-          vMin += positive;
-        }
-        positive = f * partsM[at + 1]!;
-        negative = f * partsM[at + 2]!;
-        if (positive >= negative) {
-          mMax += positive;
-          mMin += negative;
-        } else {
-          mMax += negative;
-          mMin += positive;
-        }
-        positive = f * partsUy[at + 1]!;
-        negative = f * partsUy[at + 2]!;
-        if (positive >= negative) {
-          yMax += positive;
-          yMin += negative;
-        } else {
-          yMax += negative;
-          yMin += positive;
-        }
-      }
-      const row = new EnvelopeRow(x, mMax, mMin, vMax, vMin, yMax, yMin);
-      rows[c]![s] = row;
-      star.Mmax = Math.max(star.Mmax, row.Mmax);
-      star.Mmin = Math.min(star.Mmin, row.Mmin);
-      star.Vmax = Math.max(star.Vmax, row.Vmax);
-      star.Vmin = Math.min(star.Vmin, row.Vmin);
-      star.uyMax = Math.max(star.uyMax, row.uyMax);
-      star.uyMin = Math.min(star.uyMin, row.uyMin);
+    // parts[6c..6c+5]: positive and negative parts of V, M, uy of patterned case c
+    for (const c of patternedCases) {
+      splitParts(splits.V[c]![k]!, 2, u, parts, 6 * c);
+      splitParts(splits.M[c]![k]!, 3, u, parts, 6 * c + 2);
+      splitParts(splits.uy[c]![k]!, 5, u, parts, 6 * c + 4);
     }
-    rows[combos.length]![s] = star;
+    const x = places.x[s]!;
+    let starVMax = -Infinity;
+    let starVMin = Infinity;
+    let starMMax = -Infinity;
+    let starMMin = Infinity;
+    let starYMax = -Infinity;
+    let starYMin = Infinity;
+    const v = k * stride + vAt;
+    const m = k * stride + mAt;
+    const y = k * stride + yAt;
+    for (let c = 0; c < combos.length; c++) {
+      // the combination's own value, as its station row has it (same expressions)
+      const co = coefs[c]!;
+      let vMax = (co[v + 2]! * u + co[v + 1]!) * u + co[v]!;
+      let mMax = ((co[m + 3]! * u + co[m + 2]!) * u + co[m + 1]!) * u + co[m]!;
+      let yMax = ((((co[y + 5]! * u + co[y + 4]!) * u + co[y + 3]!) * u + co[y + 2]!) * u + co[y + 1]!) * u + co[y]!;
+      let vMin = vMax;
+      let mMin = mMax;
+      let yMin = yMax;
+      for (let j = starts[c]!; j < starts[c + 1]!; j++) {
+        const at = 6 * caseIndex[j]!;
+        const f = factor[j]!;
+        let positive = f * parts[at]!;
+        let negative = f * parts[at + 1]!;
+        vMax -= Math.min(positive, negative);
+        vMin -= Math.max(positive, negative);
+        positive = f * parts[at + 2]!;
+        negative = f * parts[at + 3]!;
+        mMax -= Math.min(positive, negative);
+        mMin -= Math.max(positive, negative);
+        positive = f * parts[at + 4]!;
+        negative = f * parts[at + 5]!;
+        yMax -= Math.min(positive, negative);
+        yMin -= Math.max(positive, negative);
+      }
+      rows[c]![s] = new EnvelopeRow(x, mMax, mMin, vMax, vMin, yMax, yMin);
+      if (peaks) {
+        const p = 12 * c;
+        if (vMax > peaks[p]!) (peaks[p] = vMax), (peaks[p + 6] = x);
+        if (vMin < peaks[p + 1]!) (peaks[p + 1] = vMin), (peaks[p + 7] = x);
+        if (mMax > peaks[p + 2]!) (peaks[p + 2] = mMax), (peaks[p + 8] = x);
+        if (mMin < peaks[p + 3]!) (peaks[p + 3] = mMin), (peaks[p + 9] = x);
+        if (yMax > peaks[p + 4]!) (peaks[p + 4] = yMax), (peaks[p + 10] = x);
+        if (yMin < peaks[p + 5]!) (peaks[p + 5] = yMin), (peaks[p + 11] = x);
+      }
+      if (vMax > starVMax) starVMax = vMax;
+      if (vMin < starVMin) starVMin = vMin;
+      if (mMax > starMMax) starMMax = mMax;
+      if (mMin < starMMin) starMMin = mMin;
+      if (yMax > starYMax) starYMax = yMax;
+      if (yMin < starYMin) starYMin = yMin;
+    }
+    rows[combos.length]![s] = new EnvelopeRow(x, starMMax, starMMin, starVMax, starVMin, starYMax, starYMin);
   }
   return rows;
 }
@@ -196,31 +216,14 @@ function horner(coef: Float64Array, o: number, degree: number, u: number): numbe
 }
 
 /**
- * Per load case at (k, u), the quantity's coefficients at `at`: [value, positive part, negative part], as `evaluateCaseParts`, but a
- * patterned case reads the sums of its positive and of its negative pieces from the sign splits
- * (two polynomials instead of one per span piece). Inside a sub-interval no piece changes sign,
- * so the parts are the same sums, added before evaluation instead of after.
+ * The positive and negative parts of a patterned case's quantity at u of an interval, from its
+ * sign split: inside a sub-interval no piece changes sign, so the parts are the sums of pieces by
+ * sign, added before evaluation instead of after.
  */
-function evaluateSplitParts(analysis: Analysis, splits: (PatternSplit[] | null)[], at: number, k: number, u: number, degree: number, out: Float64Array): void {
-  const cases = analysis.cases;
-  const n = degree + 1;
-  for (let c = 0; c < cases.length; c++) {
-    const perInterval = splits[c];
-    if (!perInterval) {
-      const v = horner(cases[c]!.curve.coef, at, degree, u);
-      out[3 * c] = v;
-      out[3 * c + 1] = v;
-      out[3 * c + 2] = v;
-      continue;
-    }
-    const split = perInterval[k]!;
-    const cuts = split.cuts;
-    let s = 0;
-    while (s + 2 < cuts.length && u >= cuts[s + 1]!) s++;
-    const positive = horner(split.positive, s * n, degree, u);
-    const negative = horner(split.negative, s * n, degree, u);
-    out[3 * c] = positive + negative;
-    out[3 * c + 1] = positive;
-    out[3 * c + 2] = negative;
-  }
+function splitParts(split: PatternSplit, degree: number, u: number, out: Float64Array, at: number): void {
+  const cuts = split.cuts;
+  let s = 0;
+  while (s + 2 < cuts.length && u >= cuts[s + 1]!) s++;
+  out[at] = horner(split.positive, s * (degree + 1), degree, u);
+  out[at + 1] = horner(split.negative, s * (degree + 1), degree, u);
 }
