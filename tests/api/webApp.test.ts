@@ -33,6 +33,22 @@ describe("the built web app, served by the API on one port", () => {
     expect(res.headers["content-type"]).toMatch(/javascript/);
   });
 
+  // The editor's page names its chunks as module preloads, from Vite's manifest; other pages do not
+  // (the sign-in page's JS stays split from the editor's).
+  it("names the editor's chunks as module preloads on the editor's URL only", async () => {
+    const manifest = JSON.parse(fs.readFileSync(path.join(t.config.webDistDir, ".vite", "manifest.json"), "utf8"));
+    const editorChunk = manifest["src/editor/BeamEditorPage.tsx"].file as string;
+    const preloads = (html: string) => [...html.matchAll(/<link rel="modulepreload" crossorigin href="([^"]+)">/g)].map((m) => m[1]!);
+    const editor = await t.client().get("/projects/some-id/beams/other-id");
+    expect(editor.headers["cache-control"]).toBe("no-cache");
+    const named = preloads(editor.text);
+    expect(named).toContain(`/${editorChunk}`);
+    for (const href of named) expect((await t.client().get(href)).status, href).toBe(200);
+    for (const url of ["/", "/sign-in", "/projects/some-id"]) {
+      expect(preloads((await t.client().get(url)).text), url).not.toContain(`/${editorChunk}`);
+    }
+  });
+
   it("keeps /api paths out of the fallback", async () => {
     const res = await t.client().get("/api/not-a-route");
     expect(res.status).toBe(404);
