@@ -5,7 +5,7 @@ import helmet from "helmet";
 import { randomUUID } from "node:crypto";
 import { pino, type Logger } from "pino";
 import { pinoHttp } from "pino-http";
-import { apiLimits } from "@spanwright/contracts";
+import { apiLimits, apiRoutes } from "@spanwright/contracts";
 import { registerAuthRoutes } from "./auth/auth.routes.js";
 import { createAuthService } from "./auth/auth.service.js";
 import { createEmailVerificationService } from "./auth/emailVerification.js";
@@ -20,6 +20,7 @@ import type { Database } from "./db/client.js";
 import { registerHealthRoutes } from "./health/health.routes.js";
 import { AppError } from "./http/appError.js";
 import { checkOrigin } from "./http/csrf.js";
+import { keepRawBodyFor } from "./http/rawBody.js";
 import { apiNotFound, errorHandler } from "./http/errorHandler.js";
 import { registerMemberRoutes } from "./members/members.routes.js";
 import { createMembersService } from "./members/members.service.js";
@@ -147,7 +148,7 @@ export function createApp(deps: AppDeps): { app: Express; services: Services; ap
     "/api",
     cookieParser(),
     checkOrigin({ allowedOrigins: config.allowedOrigins, sessionCookieName: config.sessionCookieName }),
-    express.json({ limit: apiLimits.bodyBytes }),
+    express.json({ limit: apiLimits.bodyBytes, verify: keepRawBodyFor([apiRoutes.solve.path]) }),
   );
   app.use(apiRouter);
   app.use("/api", apiNotFound);

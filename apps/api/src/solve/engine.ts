@@ -10,7 +10,16 @@ export interface Engine {
    * Resolves to the result as JSON text, or rejects with an error with `code` `invalid-model` |
    * `mechanism` | `too-large` (a SolverError, also for a solve past the deadline), or an AppError.
    */
-  solve(model: unknown): Promise<string>;
+  solve(model: unknown, options?: SolveOptions): Promise<string>;
+}
+
+export interface SolveOptions {
+  /**
+   * The same model as the JSON text it was parsed from, when the caller has it: a solver thread
+   * then parses the text instead of receiving a structured clone of the parsed object (a string
+   * crosses threads as one copy, an object graph is walked on both sides).
+   */
+  json?: string;
 }
 
 const solverCodes = new Set(["invalid-model", "mechanism", "too-large"]);
@@ -73,10 +82,10 @@ export function checkModelSize(model: unknown): void {
 }
 
 /** Runs the engine; the result as JSON text (the solve route sends it unparsed). */
-export async function runSolverJson(engine: Engine, model: unknown): Promise<string> {
+export async function runSolverJson(engine: Engine, model: unknown, options?: SolveOptions): Promise<string> {
   checkModelSize(model);
   try {
-    return await engine.solve(model);
+    return await engine.solve(model, options);
   } catch (error) {
     if (isSolverFailure(error)) {
       throw new AppError(error.code, error.message, { where: error.where ?? "" });

@@ -1,6 +1,7 @@
 import { apiRoutes } from "@spanwright/contracts";
 import type { Router } from "express";
 import { requireAuth } from "../auth/sessionCookie.js";
+import { rawBodyOf } from "../http/rawBody.js";
 import { runSolverJson, type Engine } from "./engine.js";
 
 /**
@@ -11,7 +12,10 @@ import { runSolverJson, type Engine } from "./engine.js";
 export function registerSolveRoutes(router: Router, engine: Engine): void {
   router.post(apiRoutes.solve.path, async (req, res) => {
     requireAuth(res);
-    // the solver thread already wrote the JSON: send it as it is rather than parse and re-serialise
-    res.type("application/json").send(await runSolverJson(engine, req.body));
+    const json = await runSolverJson(engine, req.body, { json: rawBodyOf(req) });
+    // The solver thread already wrote the JSON: send it as it is rather than parse and re-serialise,
+    // and without res.send's ETag (a hash of the whole answer, of no use to a POST).
+    res.status(200).type("application/json").setHeader("Content-Length", Buffer.byteLength(json));
+    res.end(json);
   });
 }

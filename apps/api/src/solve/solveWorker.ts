@@ -10,7 +10,8 @@ function answer(task: WorkerTask): WorkerReply {
   try {
     // a JSON string, not the object: the solve route sends it as it is, and a string crosses the
     // thread boundary far cheaper than a deep clone of thousands of station records
-    return { id: task.id, ok: true, json: JSON.stringify(solve(task.model)) };
+    const model = task.json !== undefined ? JSON.parse(task.json) : task.model;
+    return { id: task.id, ok: true, json: JSON.stringify(solve(model)) };
   } catch (error) {
     const e = error as { name?: unknown; code?: unknown; message?: unknown; where?: unknown; stack?: unknown };
     return {

@@ -29,6 +29,14 @@ describe("solver pool", () => {
     expect(result.format).toBe("spanwright.result/1");
   }, 20_000);
 
+  it("solves from the model's JSON text when given it (the solve route passes the request's body)", async () => {
+    const model = twoSpanModel();
+    const fromText = await pool.solve({ ignored: "the text is what the thread reads" }, { json: JSON.stringify(model) });
+    expect(fromText).toBe(await pool.solve(model));
+    const wrong = { ...model, segments: [{ E: 2e11, I: -1 }, { E: 2e11, I: 1e-4 }] };
+    await expect(pool.solve(model, { json: JSON.stringify(wrong) })).rejects.toMatchObject({ code: "invalid-model", where: expect.stringContaining("segments") });
+  });
+
   it("passes the solver's own errors back with code and where", async () => {
     const model = { ...twoSpanModel(), segments: [{ E: 2e11, I: -1 }, { E: 2e11, I: 1e-4 }] };
     await expect(pool.solve(model)).rejects.toMatchObject({ name: "SolverError", code: "invalid-model", where: expect.stringContaining("segments") });

@@ -7,7 +7,9 @@ import { solverWorkerSource } from "./solverWorkerBundle.js";
 /** What the pool posts to a solver thread (solveWorker.ts). */
 export interface WorkerTask {
   id: number;
+  /** The model, or with `json` undefined (the thread parses the text). */
   model: unknown;
+  json?: string;
 }
 
 /** What a solver thread posts once it has loaded and warmed up the engine. */
@@ -44,6 +46,7 @@ export interface SolverPool extends Engine {
 interface Job {
   id: number;
   model: unknown;
+  json: string | undefined;
   /** Ends the wait for a thread; cleared once a thread takes the job. */
   waitTimer: NodeJS.Timeout | null;
   resolve: (json: string) => void;
@@ -156,7 +159,8 @@ export function createSolverPool(options: SolverPoolOptions): SolverPool {
           where: "",
         }));
       }, options.timeoutMs);
-      slot.worker.postMessage({ id: job.id, model: job.model } satisfies WorkerTask);
+      const task: WorkerTask = job.json !== undefined ? { id: job.id, model: undefined, json: job.json } : { id: job.id, model: job.model };
+      slot.worker.postMessage(task);
     }
   }
 
@@ -164,11 +168,11 @@ export function createSolverPool(options: SolverPoolOptions): SolverPool {
 
   return {
     threads,
-    solve(model) {
+    solve(model, solveOptions) {
       if (closed) return Promise.reject(new Error("the solver pool is closed"));
       if (queue.length >= maxQueue) return Promise.reject(busy());
       return new Promise<string>((resolve, reject) => {
-        const job: Job = { id: nextId++, model, waitTimer: null, resolve, reject };
+        const job: Job = { id: nextId++, model, json: solveOptions?.json, waitTimer: null, resolve, reject };
         // never a hung request: a solve that cannot get a thread in time is refused, not kept waiting
         job.waitTimer = setTimeout(() => {
           const index = queue.indexOf(job);
