@@ -1,7 +1,7 @@
 import type { Analysis } from "./analysisTypes.js";
 import { combineParts, envelopeFactorSets, ENVELOPE_QUANTITIES, evaluateCaseParts, type EnvelopeQuantity, type FactorSet } from "./envelopeQueries.js";
 import { QUANTITY_LAYOUT, type Extreme, type Extremes } from "./fieldQueries.js";
-import { evaluatePolynomial, findSignChanges } from "./polynomial.js";
+import { evaluatePolynomial, signChangesInto } from "./polynomial.js";
 import { COEFFICIENTS_PER_INTERVAL } from "./segmentField.js";
 
 /**
@@ -30,6 +30,7 @@ export function prepareEnvelopeExtremes(analysis: Analysis): EnvelopeExtremesCon
   for (const quantity of ENVELOPE_QUANTITIES) {
     const { offset, degree } = QUANTITY_LAYOUT[quantity];
     const n = degree + 1;
+    const own = new Float64Array(degree);
     splits[quantity] = analysis.cases.map((loadCase) => {
       if (!loadCase.pattern) return null;
       const perInterval: PatternSplit[] = [];
@@ -52,12 +53,12 @@ export function prepareEnvelopeExtremes(analysis: Analysis): EnvelopeExtremesCon
             for (let i = 0; i < n; i++) target[i]! += coef[o + i]!;
             continue;
           }
-          const own = findSignChanges(coef, o, degree, 0, h);
-          const side = initialSide(coef, o, degree, h, own);
+          const count = signChangesInto(coef, o, degree, 0, h, own);
+          const side = initialSide(coef, o, degree, h, own, count);
           const target = side > 0 ? positiveSum : negativeSum;
           for (let i = 0; i < n; i++) target[i]! += coef[o + i]!;
-          for (const root of own) {
-            roots.push(root);
+          for (let r = 0; r < count; r++) {
+            roots.push(own[r]!);
             owners.push(changing.length);
           }
           changing.push(coef);
@@ -102,13 +103,14 @@ export function prepareEnvelopeExtremes(analysis: Analysis): EnvelopeExtremesCon
 
 /**
  * The sign (+1, −1) of a polynomial on [0, h] left of its first sign change, read at the middle of
- * the widest stretch between its sign changes (`roots`, ascending) and carried back across them.
+ * the widest stretch between its sign changes (the first `count` of `roots`, ascending) and
+ * carried back across them.
  */
-function initialSide(coef: Float64Array, o: number, degree: number, h: number, roots: number[]): number {
+function initialSide(coef: Float64Array, o: number, degree: number, h: number, roots: Float64Array, count: number): number {
   let widest = 0;
   let width = -1;
-  for (let j = 0; j <= roots.length; j++) {
-    const w = (j < roots.length ? roots[j]! : h) - (j > 0 ? roots[j - 1]! : 0);
+  for (let j = 0; j <= count; j++) {
+    const w = (j < count ? roots[j]! : h) - (j > 0 ? roots[j - 1]! : 0);
     if (w > width) [widest, width] = [j, w];
   }
   const a = widest > 0 ? roots[widest - 1]! : 0;
@@ -186,6 +188,7 @@ function visitFactorSet(context: EnvelopeExtremesContext, factors: FactorSet, qu
   const lower = new Float64Array(n);
   const shifted = new Float64Array(n);
   const derivative = new Float64Array(degree);
+  const candidates = new Float64Array(degree + 2);
   const cursor = new Int32Array(patterned.length);
   seedWithBreakpoints(context, factors, quantity, tracker);
   /** Visits the ends and interior stationary points of poly on [a, b] unless a bound rules it out. */
@@ -204,9 +207,11 @@ function visitFactorSet(context: EnvelopeExtremesContext, factors: FactorSet, qu
     }
     if (isUpper ? bound <= tracker.max.value : bound >= tracker.min.value) return;
     for (let i = 1; i <= degree; i++) derivative[i - 1] = i * poly[i]!;
-    const candidates = findSignChanges(derivative, 0, degree - 1, a, b);
-    candidates.push(a, b);
-    for (const u of candidates) {
+    const stationary = signChangesInto(derivative, 0, degree - 1, a, b, candidates);
+    candidates[stationary] = a;
+    candidates[stationary + 1] = b;
+    for (let c = 0; c < stationary + 2; c++) {
+      const u = candidates[c]!;
       const v = evaluatePolynomial(poly, 0, degree, u);
       // The interval's right end is reported at the breakpoint itself, not x0 + h (rounding).
       if (isUpper ? v > tracker.max.value : v < tracker.min.value) {

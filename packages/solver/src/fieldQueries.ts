@@ -1,5 +1,5 @@
 import type { Analysis, Curve } from "./analysisTypes.js";
-import { evaluatePolynomial, findSignChanges } from "./polynomial.js";
+import { evaluatePolynomial, signChangesInto } from "./polynomial.js";
 import { COEFFICIENTS_PER_INTERVAL, M_OFFSET, RZ_OFFSET, UY_OFFSET, V_OFFSET } from "./segmentField.js";
 
 /** A field of the beam: shear V (N), moment M (N·m, sagging +), deflection uy (m, up +), rotation rz (rad, CCW +). */
@@ -136,6 +136,9 @@ export class ExtremeTracker {
   }
 }
 
+/** Roots of a derivative in `visitPolynomialExtremes` (reused: a call keeps none past its return). */
+let roots = new Float64Array(8);
+
 /**
  * Visits the values of a polynomial on [0, h] at both ends and at every interior extreme (sign
  * change of its derivative); `scratch` needs length ≥ degree. The right end is reported at x1
@@ -153,7 +156,9 @@ export function visitPolynomialExtremes(
 ): void {
   tracker.visit(evaluatePolynomial(coef, offset, degree, 0), x0);
   for (let k = 1; k <= degree; k++) scratch[k - 1] = k * coef[offset + k]!;
-  for (const u of findSignChanges(scratch, 0, degree - 1, 0, h)) tracker.visit(evaluatePolynomial(coef, offset, degree, u), x0 + u);
+  if (roots.length < degree) roots = new Float64Array(degree);
+  const count = signChangesInto(scratch, 0, degree - 1, 0, h, roots);
+  for (let i = 0; i < count; i++) tracker.visit(evaluatePolynomial(coef, offset, degree, roots[i]!), x0 + roots[i]!);
   tracker.visit(evaluatePolynomial(coef, offset, degree, h), x1);
 }
 

@@ -14,15 +14,14 @@ function differentiate(coef: ArrayLike<number>, offset: number, degree: number, 
 }
 
 /**
- * One work array per derivative degree, reused: the recursion below reads a degree-d polynomial
- * and writes its derivative into the degree-(d − 1) array, so no two live calls share one. This
- * runs for every pattern piece on every interval, where allocating typed arrays cost more than
- * the arithmetic.
+ * Work arrays per polynomial degree, reused: the recursion below reads a degree-d polynomial,
+ * writes its derivative into the degree-d derivative array and the derivative's sign changes into
+ * the degree-d critical-point array, and recurses on degree d − 1, so no two live calls share one.
+ * This runs for every interval of every curve and every pattern piece, where allocating arrays cost
+ * more than the arithmetic (and their collection made the large solves' timings uneven).
  */
-const scratch: Float64Array[] = [];
-function derivativeScratch(length: number): Float64Array {
-  return (scratch[length] ??= new Float64Array(length));
-}
+const derivatives: Float64Array[] = [];
+const criticals: Float64Array[] = [];
 
 /**
  * The real roots strictly inside (lo, hi) where the polynomial changes sign, ascending.
@@ -32,39 +31,55 @@ function derivativeScratch(length: number): Float64Array {
  * skipped on purpose: callers use them to find extremes and sign changes, where they do not count.
  */
 export function findSignChanges(coef: ArrayLike<number>, offset: number, degree: number, lo: number, hi: number): number[] {
+  const out = new Float64Array(Math.max(degree, 1));
+  return Array.from(out.subarray(0, signChangesInto(coef, offset, degree, lo, hi, out)));
+}
+
+/**
+ * `findSignChanges` without allocating: writes the roots into `out` (length ≥ degree) from index 0
+ * and returns how many there are. `out` must not be `coef`.
+ */
+export function signChangesInto(coef: ArrayLike<number>, offset: number, degree: number, lo: number, hi: number, out: Float64Array): number {
   let d = degree;
   while (d > 0 && coef[offset + d] === 0) d--;
-  if (d <= 0 || !(hi > lo)) return [];
+  if (d <= 0 || !(hi > lo)) return 0;
   if (d === 1) {
     const root = -coef[offset]! / coef[offset + 1]!;
-    return root > lo && root < hi ? [root] : [];
+    if (!(root > lo && root < hi)) return 0;
+    out[0] = root;
+    return 1;
   }
-  if (d === 2) return quadraticSignChanges(coef[offset]!, coef[offset + 1]!, coef[offset + 2]!, lo, hi);
-  const derivative = derivativeScratch(d);
+  if (d === 2) return quadraticSignChanges(coef[offset]!, coef[offset + 1]!, coef[offset + 2]!, lo, hi, out);
+  const derivative = (derivatives[d] ??= new Float64Array(d));
+  const critical = (criticals[d] ??= new Float64Array(d));
   differentiate(coef, offset, d, derivative);
-  const critical = findSignChanges(derivative, 0, d - 1, lo, hi);
-  const roots: number[] = [];
+  const nCritical = signChangesInto(derivative, 0, d - 1, lo, hi, critical);
+  let count = 0;
   let a = lo;
   let fa = evaluatePolynomial(coef, offset, d, a);
-  for (let i = 0; i <= critical.length; i++) {
-    const b = i < critical.length ? critical[i]! : hi;
+  for (let i = 0; i <= nCritical; i++) {
+    const b = i < nCritical ? critical[i]! : hi;
     const fb = evaluatePolynomial(coef, offset, d, b);
-    if ((fa < 0 && fb > 0) || (fa > 0 && fb < 0)) roots.push(refineRoot(coef, offset, d, a, fa, b, fb));
+    if ((fa < 0 && fb > 0) || (fa > 0 && fb < 0)) out[count++] = refineRoot(coef, offset, d, a, fa, b, fb);
     a = b;
     fa = fb;
   }
-  return roots;
+  return count;
 }
 
-/** Roots of c + b·u + a·u² in (lo, hi), by the cancellation-free form of the quadratic formula. */
-function quadraticSignChanges(c: number, b: number, a: number, lo: number, hi: number): number[] {
+/** Roots of c + b·u + a·u² in (lo, hi) into `out`, by the cancellation-free form of the quadratic formula. */
+function quadraticSignChanges(c: number, b: number, a: number, lo: number, hi: number, out: Float64Array): number {
   const discriminant = b * b - 4 * a * c;
-  if (!(discriminant > 0)) return [];
+  if (!(discriminant > 0)) return 0;
   const q = -0.5 * (b + Math.sign(b || 1) * Math.sqrt(discriminant));
   const r1 = q / a;
   const r2 = q !== 0 ? c / q : r1;
-  const roots = r1 < r2 ? [r1, r2] : [r2, r1];
-  return roots.filter((r) => r > lo && r < hi);
+  const first = Math.min(r1, r2);
+  const second = Math.max(r1, r2);
+  let count = 0;
+  if (first > lo && first < hi) out[count++] = first;
+  if (second > lo && second < hi) out[count++] = second;
+  return count;
 }
 
 function refineRoot(coef: ArrayLike<number>, offset: number, degree: number, a: number, fa: number, b: number, fb: number): number {
