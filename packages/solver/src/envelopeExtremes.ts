@@ -33,6 +33,13 @@ export function prepareEnvelopeExtremes(analysis: Analysis): EnvelopeExtremesCon
     const own = new Float64Array(degree);
     splits[quantity] = analysis.cases.map((loadCase) => {
       if (!loadCase.pattern) return null;
+      const pieces = loadCase.pieces;
+      // work arrays for one interval at a time: sign-change roots ascending, with the piece of each
+      const roots = new Float64Array(pieces.length * degree);
+      const owners = new Int32Array(pieces.length * degree);
+      const sides = new Int8Array(pieces.length);
+      const positiveSum = new Float64Array(n);
+      const negativeSum = new Float64Array(n);
       const perInterval: PatternSplit[] = [];
       for (let k = 0; k + 1 < grid.length; k++) {
         const h = grid[k + 1]! - grid[k]!;
@@ -40,48 +47,55 @@ export function prepareEnvelopeExtremes(analysis: Analysis): EnvelopeExtremesCon
         // Pieces that keep their sign on the interval go to one side once. Each other piece starts
         // on the side of its sign left of its first root and changes side at each of its roots (all
         // sign changes): no evaluation near a root, where the sign is rounding noise.
-        const positiveSum = new Float64Array(n);
-        const negativeSum = new Float64Array(n);
-        const changing: Float64Array[] = [];
-        const sides: number[] = [];
-        const roots: number[] = [];
-        const owners: number[] = [];
-        for (const piece of loadCase.pieces) {
-          const coef = piece.curve.coef;
+        positiveSum.fill(0);
+        negativeSum.fill(0);
+        let count = 0;
+        for (let p = 0; p < pieces.length; p++) {
+          const coef = pieces[p]!.curve.coef;
           if (keepsSign(coef, o, degree, h)) {
             const target = coef[o]! > 0 ? positiveSum : negativeSum;
             for (let i = 0; i < n; i++) target[i]! += coef[o + i]!;
             continue;
           }
-          const count = signChangesInto(coef, o, degree, 0, h, own);
-          const side = initialSide(coef, o, degree, h, own, count);
+          const found = signChangesInto(coef, o, degree, 0, h, own);
+          const side = initialSide(coef, o, degree, h, own, found);
+          sides[p] = side;
           const target = side > 0 ? positiveSum : negativeSum;
           for (let i = 0; i < n; i++) target[i]! += coef[o + i]!;
-          for (let r = 0; r < count; r++) {
-            roots.push(own[r]!);
-            owners.push(changing.length);
+          // insertion into the sorted roots (a few dozen per interval; ties keep piece order)
+          for (let r = 0; r < found; r++) {
+            let at = count++;
+            while (at > 0 && roots[at - 1]! > own[r]!) {
+              roots[at] = roots[at - 1]!;
+              owners[at] = owners[at - 1]!;
+              at--;
+            }
+            roots[at] = own[r]!;
+            owners[at] = p;
           }
-          changing.push(coef);
-          sides.push(side);
         }
-        const order = roots.map((_, i) => i).sort((i, j) => roots[i]! - roots[j]! || i - j);
-        const cuts = [0, ...order.map((i) => roots[i]!), h];
-        const subs = cuts.length - 1;
-        const positive = new Float64Array(subs * n);
-        const negative = new Float64Array(subs * n);
-        positive.set(positiveSum, 0);
-        negative.set(negativeSum, 0);
-        for (let s = 1; s < subs; s++) {
-          const p = owners[order[s - 1]!]!;
-          const coef = changing[p]!;
-          const [from, to] = sides[p]! > 0 ? [positiveSum, negativeSum] : [negativeSum, positiveSum];
+        const cuts: number[] = new Array(count + 2);
+        cuts[0] = 0;
+        for (let r = 0; r < count; r++) cuts[r + 1] = roots[r]!;
+        cuts[count + 1] = h;
+        const positive = new Float64Array((count + 1) * n);
+        const negative = new Float64Array((count + 1) * n);
+        for (let i = 0; i < n; i++) {
+          positive[i] = positiveSum[i]!;
+          negative[i] = negativeSum[i]!;
+        }
+        for (let s = 1; s <= count; s++) {
+          const p = owners[s - 1]!;
+          const coef = pieces[p]!.curve.coef;
+          const from = sides[p]! > 0 ? positiveSum : negativeSum;
+          const to = sides[p]! > 0 ? negativeSum : positiveSum;
           for (let i = 0; i < n; i++) {
             from[i]! -= coef[o + i]!;
             to[i]! += coef[o + i]!;
+            positive[s * n + i] = positiveSum[i]!;
+            negative[s * n + i] = negativeSum[i]!;
           }
           sides[p] = -sides[p]!;
-          positive.set(positiveSum, s * n);
-          negative.set(negativeSum, s * n);
         }
         perInterval.push({ cuts, positive, negative });
       }
