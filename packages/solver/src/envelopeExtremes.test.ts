@@ -45,4 +45,18 @@ describe("sign splits of a patterned case", () => {
     expect(sub(2, split.positive)).toEqual([-r - 2 * r2, 3, 0]);
     expect(sub(2, split.negative)).toEqual([0, 0, 0]);
   });
+
+  // A piece added to a side and later taken away must not leave its rounding there: the sums can
+  // be far smaller than the pieces that passed through them (here 1 beside pieces of 2⁵⁸ and more).
+  it("leave no rounding behind when large pieces move to the other side", () => {
+    const big = 2 ** 60;
+    const a = shearCurve(big / 4, -big); // positive left of u = 0.25
+    const one = shearCurve(1, 0); // positive throughout
+    const c = shearCurve(big / 2, -big); // positive left of u = 0.5
+    const split = prepareEnvelopeExtremes(patternedAnalysis([a, one, c])).splits.V[0]![0]!;
+    expect(split.cuts).toEqual([0, 0.25, 0.5, 4]);
+    const n = 3;
+    expect(Array.from(split.positive.subarray(2 * n, 3 * n))).toEqual([1, 0, 0]);
+    expect(Array.from(split.negative.subarray(2 * n, 3 * n))).toEqual([(3 * big) / 4, -2 * big, 0]);
+  });
 });

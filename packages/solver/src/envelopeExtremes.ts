@@ -38,8 +38,11 @@ export function prepareEnvelopeExtremes(analysis: Analysis): EnvelopeExtremesCon
       const roots = new Float64Array(pieces.length * degree);
       const owners = new Int32Array(pieces.length * degree);
       const sides = new Int8Array(pieces.length);
-      const positiveSum = new Float64Array(n);
-      const negativeSum = new Float64Array(n);
+      // running sums of the pieces on each side, with Neumaier compensation: a piece added and
+      // later taken away again must not leave its rounding behind (sums can be far smaller than
+      // the pieces that passed through them)
+      const positiveSum = new CompensatedSums(n);
+      const negativeSum = new CompensatedSums(n);
       const perInterval: PatternSplit[] = [];
       for (let k = 0; k + 1 < grid.length; k++) {
         const h = grid[k + 1]! - grid[k]!;
@@ -47,21 +50,19 @@ export function prepareEnvelopeExtremes(analysis: Analysis): EnvelopeExtremesCon
         // Pieces that keep their sign on the interval go to one side once. Each other piece starts
         // on the side of its sign left of its first root and changes side at each of its roots (all
         // sign changes): no evaluation near a root, where the sign is rounding noise.
-        positiveSum.fill(0);
-        negativeSum.fill(0);
+        positiveSum.clear();
+        negativeSum.clear();
         let count = 0;
         for (let p = 0; p < pieces.length; p++) {
           const coef = pieces[p]!.curve.coef;
           if (keepsSign(coef, o, degree, h)) {
-            const target = coef[o]! > 0 ? positiveSum : negativeSum;
-            for (let i = 0; i < n; i++) target[i]! += coef[o + i]!;
+            (coef[o]! > 0 ? positiveSum : negativeSum).add(coef, o, 1);
             continue;
           }
           const found = signChangesInto(coef, o, degree, 0, h, own);
           const side = initialSide(coef, o, degree, h, own, found);
           sides[p] = side;
-          const target = side > 0 ? positiveSum : negativeSum;
-          for (let i = 0; i < n; i++) target[i]! += coef[o + i]!;
+          (side > 0 ? positiveSum : negativeSum).add(coef, o, 1);
           // insertion into the sorted roots (a few dozen per interval; ties keep piece order)
           for (let r = 0; r < found; r++) {
             let at = count++;
@@ -80,22 +81,16 @@ export function prepareEnvelopeExtremes(analysis: Analysis): EnvelopeExtremesCon
         cuts[count + 1] = h;
         const positive = new Float64Array((count + 1) * n);
         const negative = new Float64Array((count + 1) * n);
-        for (let i = 0; i < n; i++) {
-          positive[i] = positiveSum[i]!;
-          negative[i] = negativeSum[i]!;
-        }
+        positiveSum.writeTo(positive, 0);
+        negativeSum.writeTo(negative, 0);
         for (let s = 1; s <= count; s++) {
           const p = owners[s - 1]!;
           const coef = pieces[p]!.curve.coef;
-          const from = sides[p]! > 0 ? positiveSum : negativeSum;
-          const to = sides[p]! > 0 ? negativeSum : positiveSum;
-          for (let i = 0; i < n; i++) {
-            from[i]! -= coef[o + i]!;
-            to[i]! += coef[o + i]!;
-            positive[s * n + i] = positiveSum[i]!;
-            negative[s * n + i] = negativeSum[i]!;
-          }
+          (sides[p]! > 0 ? positiveSum : negativeSum).add(coef, o, -1);
+          (sides[p]! > 0 ? negativeSum : positiveSum).add(coef, o, 1);
           sides[p] = -sides[p]!;
+          positiveSum.writeTo(positive, s * n);
+          negativeSum.writeTo(negative, s * n);
         }
         perInterval.push({ cuts, positive, negative });
       }
@@ -113,6 +108,37 @@ export function prepareEnvelopeExtremes(analysis: Analysis): EnvelopeExtremesCon
     ends[quantity] = values;
   }
   return { analysis, splits, ends };
+}
+
+/** n running sums with Neumaier's compensation (each sum carries the rounding it has dropped). */
+class CompensatedSums {
+  private readonly sum: Float64Array;
+  private readonly compensation: Float64Array;
+  constructor(private readonly n: number) {
+    this.sum = new Float64Array(n);
+    this.compensation = new Float64Array(n);
+  }
+
+  clear(): void {
+    this.sum.fill(0);
+    this.compensation.fill(0);
+  }
+
+  /** Adds sign·values[offset + i] to sum i (sign ±1: exact). */
+  add(values: Float64Array, offset: number, sign: number): void {
+    const { sum, compensation } = this;
+    for (let i = 0; i < this.n; i++) {
+      const value = sign * values[offset + i]!;
+      const s = sum[i]!;
+      const t = s + value;
+      compensation[i]! += Math.abs(s) >= Math.abs(value) ? s - t + value : value - t + s;
+      sum[i] = t;
+    }
+  }
+
+  writeTo(out: Float64Array, at: number): void {
+    for (let i = 0; i < this.n; i++) out[at + i] = this.sum[i]! + this.compensation[i]!;
+  }
 }
 
 /**
