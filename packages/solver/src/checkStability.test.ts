@@ -2,6 +2,7 @@ import { describe, expect, it } from "vitest";
 import { beamModelSchema, type BeamNode } from "./beamModelSchema.js";
 import { findRigidMotion } from "./checkStability.js";
 import { numberDofs } from "./numberDofs.js";
+import { solve } from "./solve.js";
 
 function isMechanism(nodes: BeamNode[]): boolean {
   const model = beamModelSchema.parse({ format: "spanwright.beam/1", nodes, segments: nodes.slice(1).map(() => ({ E: 2e11, I: 1e-4 })) });
@@ -39,7 +40,43 @@ describe("findRigidMotion (kinematic stability of rigid parts; common practice)"
       mechanism: true,
     },
     { name: "two supports very close together", nodes: [{ x: 0, support: pin }, { x: 1e-4, support: pin }, { x: 100 }], mechanism: false },
+    // Found by the mechanism property test: 5 restraints for 3 parts, with a spring 0.1 m from a
+    // hinge. The two rows are nearly parallel, and the rounding of the pivots of AᵀA (which squares
+    // that) hid the zero pivot: the beam was solved, its reactions not balancing the load.
+    { name: "guide, hinge, spring 0.1 m from a hinge, pin", nodes: nearlyDependent(false), mechanism: true },
+    { name: "the same with a pin on the middle part", nodes: nearlyDependent(true), mechanism: false },
   ])("$name: mechanism = $mechanism", ({ nodes, mechanism }) => {
     expect(isMechanism(nodes)).toBe(mechanism);
+  });
+});
+
+function nearlyDependent(pinInTheMiddle: boolean): BeamNode[] {
+  return [
+    { x: 0 },
+    { x: 0.1375 },
+    { x: 2.75, support: guided },
+    { x: 5, hinge: true },
+    { x: 5.45, ...(pinInTheMiddle ? { support: pin } : {}) },
+    { x: 11.75, support: { type: "spring" as const, ky: 1e5 } },
+    { x: 11.85, hinge: true },
+    { x: 13.75, support: pin },
+  ];
+}
+
+describe("a beam with nearly dependent restraints", () => {
+  const model = (pinInTheMiddle: boolean) => ({
+    format: "spanwright.beam/1",
+    nodes: nearlyDependent(pinInTheMiddle),
+    segments: Array.from({ length: 7 }, () => ({ E: 2e11, I: 1e-4 })),
+    loadCases: [{ id: "D", category: "dead", loads: [{ type: "point", x: 1, fy: -1000 }] }],
+  });
+
+  it("is refused as a mechanism naming what moves, not solved", () => {
+    expect(() => solve(model(false))).toThrow(expect.objectContaining({ code: "mechanism", message: expect.stringContaining("through the hinges at x = 5 m, x = 11.85 m") }));
+  });
+
+  it("with one more pin is solved, its reactions balancing the load (statics)", () => {
+    const reactions = solve(model(true)).results.D!.reactions;
+    expect(reactions.reduce((sum, r) => sum + r.fy, 0)).toBeCloseTo(1000, 6);
   });
 });

@@ -66,8 +66,66 @@ export function findRigidMotion(model: BeamModel, dofs: DofMap): Float64Array | 
     }
   }
   const factored = factorBanded(normal, KINEMATIC_TOLERANCE);
-  if (factored.ok) return undefined;
-  return toDofVector(model, dofs, partStart, partOfNode, factored.mode, length);
+  if (!factored.ok) return toDofVector(model, dofs, partStart, partOfNode, factored.mode, length);
+  const held = heldParts(model, partStart, partOfNode);
+  if (held.every(Boolean)) return undefined;
+  // A mechanism the pivots missed: its constraints are nearly dependent (a support close to a
+  // hinge), and in AᵀA rounding grows with the square of that. Pin the held parts outright, so
+  // only the free ones are left to move, and take the first pivot that is small by a looser measure.
+  for (let p = 0; p < parts; p++) {
+    if (!held[p]) continue;
+    addToBanded(normal, 2 * p, 2 * p, 1);
+    addToBanded(normal, 2 * p + 1, 2 * p + 1, 1);
+  }
+  for (let tolerance = 1e-12; ; tolerance *= 10) {
+    const loose = factorBanded(normal, tolerance);
+    if (!loose.ok) return toDofVector(model, dofs, partStart, partOfNode, loose.mode, length);
+  }
+}
+
+/**
+ * Which rigid parts the supports hold, decided exactly (no rounding): a part is held once it has
+ * two independent restraints among the points where its deflection is zero (its supports that
+ * hold uy, a support at a hinge it shares, and the hinges it shares with held parts; two points at
+ * different x) and a support that holds its rotation. Propagated until nothing changes. A part
+ * never held can move: with at most one independent restraint per free part plus the hinges
+ * between them, the free parts have fewer constraints than freedoms.
+ */
+export function heldParts(model: BeamModel, partStart: number[], partOfNode: Int32Array): boolean[] {
+  const nodes = model.nodes;
+  const n = nodes.length;
+  const parts = partStart.length;
+  const points: Set<number>[] = Array.from({ length: parts }, () => new Set<number>());
+  const rotation: boolean[] = new Array(parts).fill(false);
+  const hinge = (i: number) => nodes[i]!.hinge === true && i > 0 && i < n - 1;
+  for (let i = 0; i < n; i++) {
+    const support = nodes[i]!.support;
+    if (!support) continue;
+    const p = partOfNode[i]!;
+    const holdsUy = support.type === "pinned" || support.type === "fixed" || (support.type === "spring" && (support.ky ?? 0) > 0);
+    const holdsRz = support.type === "fixed" || support.type === "guided" || (support.type === "spring" && (support.kr ?? 0) > 0);
+    if (holdsUy) {
+      points[p]!.add(nodes[i]!.x);
+      // the deflection is shared at a hinge: the part on its left is held there too
+      if (hinge(i)) points[p - 1]!.add(nodes[i]!.x);
+    }
+    if (holdsRz) rotation[p] = true;
+  }
+  const held: boolean[] = new Array(parts).fill(false);
+  for (let changed = true; changed; ) {
+    changed = false;
+    for (let p = 0; p < parts; p++) {
+      if (held[p]) continue;
+      const at = new Set(points[p]);
+      if (p > 0 && held[p - 1]) at.add(nodes[partStart[p]!]!.x);
+      if (p + 1 < parts && held[p + 1]) at.add(nodes[partStart[p + 1]!]!.x);
+      if (at.size + (rotation[p] ? 1 : 0) >= 2) {
+        held[p] = true;
+        changed = true;
+      }
+    }
+  }
+  return held;
 }
 
 function toDofVector(model: BeamModel, dofs: DofMap, partStart: number[], partOfNode: Int32Array, mode: Float64Array, length: number): Float64Array {
