@@ -49,6 +49,15 @@ describe("the built web app, served by the API on one port", () => {
     }
   });
 
+  it("names the editor's first API requests as fetch preloads on the editor's URL only", async () => {
+    const preloads = (html: string) => [...html.matchAll(/<link rel="preload" as="fetch" crossorigin href="([^"]+)">/g)].map((m) => m[1]!);
+    const editor = await t.client().get("/projects/p-1/beams/b-2");
+    expect(preloads(editor.text)).toEqual(["/api/me", "/api/projects/p-1", "/api/projects/p-1/beams/b-2"]);
+    // ids that would need escaping get none (the page asks for them itself)
+    expect(preloads((await t.client().get("/projects/p%22x/beams/b-2")).text)).toEqual([]);
+    for (const url of ["/", "/sign-in", "/projects/p-1"]) expect(preloads((await t.client().get(url)).text), url).toEqual([]);
+  });
+
   it("keeps /api paths out of the fallback", async () => {
     const res = await t.client().get("/api/not-a-route");
     expect(res.status).toBe(404);

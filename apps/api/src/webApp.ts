@@ -1,3 +1,4 @@
+import { routePath } from "@spanwright/contracts/routes";
 import compression from "compression";
 import express, { type Express } from "express";
 import fs from "node:fs";
@@ -51,6 +52,20 @@ function editorHtml(indexHtml: string, manifest: Manifest): string {
   return links ? indexHtml.replace("<head>", `<head>\n    ${links}`) : indexHtml;
 }
 
+/**
+ * The editor's first requests (the user, the project, the beam: boot.ts asks for the same URLs) as
+ * fetch preloads, so they start with the HTML instead of once boot.ts has run. Only for ids of
+ * plain URL characters, which need no escaping here and read back the same.
+ */
+function withDataPreloads(html: string, pathname: string): string {
+  const match = /^\/projects\/([A-Za-z0-9_-]+)\/beams\/([A-Za-z0-9_-]+)\/?$/.exec(pathname);
+  if (!match) return html;
+  const [, projectId, beamId] = match as unknown as [string, string, string];
+  const urls = [routePath("me"), routePath("getProject", { projectId }), routePath("getBeam", { projectId, beamId })];
+  const links = urls.map((url) => `<link rel="preload" as="fetch" crossorigin href="${url}">`).join("\n    ");
+  return html.replace("<head>", `<head>\n    ${links}`);
+}
+
 /** The built web app with a fallback to index.html for client-side routes (GET outside /api). */
 export function serveWebApp(app: Express, distDir: string): void {
   const indexHtml = path.join(distDir, "index.html");
@@ -79,7 +94,7 @@ export function serveWebApp(app: Express, distDir: string): void {
     if ((req.method !== "GET" && req.method !== "HEAD") || req.path === "/api" || req.path.startsWith("/api/")) return next();
     if (!fs.existsSync(indexHtml)) return next();
     res.setHeader("Cache-Control", INDEX_HTML_CACHE);
-    if (EDITOR_PATH.test(req.path)) res.type("html").send(editorPageHtml());
+    if (EDITOR_PATH.test(req.path)) res.type("html").send(withDataPreloads(editorPageHtml(), req.path));
     else res.sendFile(indexHtml);
   });
 }
