@@ -1,4 +1,4 @@
-import type { Analysis } from "./analysisTypes.js";
+import type { Analysis, AnalysisCase } from "./analysisTypes.js";
 import { combineParts, envelopeFactorSets, ENVELOPE_QUANTITIES, evaluateCaseParts, type EnvelopeQuantity, type FactorSet } from "./envelopeQueries.js";
 import { QUANTITY_LAYOUT, type Extreme, type Extremes } from "./fieldQueries.js";
 import { evaluatePolynomial, signChangesInto } from "./polynomial.js";
@@ -29,73 +29,7 @@ export function prepareEnvelopeExtremes(analysis: Analysis): EnvelopeExtremesCon
   const splits = {} as EnvelopeExtremesContext["splits"];
   for (const quantity of ENVELOPE_QUANTITIES) {
     const { offset, degree } = QUANTITY_LAYOUT[quantity];
-    const n = degree + 1;
-    const own = new Float64Array(degree);
-    splits[quantity] = analysis.cases.map((loadCase) => {
-      if (!loadCase.pattern) return null;
-      const pieces = loadCase.pieces;
-      // work arrays for one interval at a time: sign-change roots ascending, with the piece of each
-      const roots = new Float64Array(pieces.length * degree);
-      const owners = new Int32Array(pieces.length * degree);
-      const sides = new Int8Array(pieces.length);
-      // running sums of the pieces on each side, with Neumaier compensation: a piece added and
-      // later taken away again must not leave its rounding behind (sums can be far smaller than
-      // the pieces that passed through them)
-      const positiveSum = new CompensatedSums(n);
-      const negativeSum = new CompensatedSums(n);
-      const perInterval: PatternSplit[] = [];
-      for (let k = 0; k + 1 < grid.length; k++) {
-        const h = grid[k + 1]! - grid[k]!;
-        const o = k * COEFFICIENTS_PER_INTERVAL + offset;
-        // Pieces that keep their sign on the interval go to one side once. Each other piece starts
-        // on the side of its sign left of its first root and changes side at each of its roots (all
-        // sign changes): no evaluation near a root, where the sign is rounding noise.
-        positiveSum.clear();
-        negativeSum.clear();
-        let count = 0;
-        for (let p = 0; p < pieces.length; p++) {
-          const coef = pieces[p]!.curve.coef;
-          if (keepsSign(coef, o, degree, h)) {
-            (coef[o]! > 0 ? positiveSum : negativeSum).add(coef, o, 1);
-            continue;
-          }
-          const found = signChangesInto(coef, o, degree, 0, h, own);
-          const side = initialSide(coef, o, degree, h, own, found);
-          sides[p] = side;
-          (side > 0 ? positiveSum : negativeSum).add(coef, o, 1);
-          // insertion into the sorted roots (a few dozen per interval; ties keep piece order)
-          for (let r = 0; r < found; r++) {
-            let at = count++;
-            while (at > 0 && roots[at - 1]! > own[r]!) {
-              roots[at] = roots[at - 1]!;
-              owners[at] = owners[at - 1]!;
-              at--;
-            }
-            roots[at] = own[r]!;
-            owners[at] = p;
-          }
-        }
-        const cuts: number[] = new Array(count + 2);
-        cuts[0] = 0;
-        for (let r = 0; r < count; r++) cuts[r + 1] = roots[r]!;
-        cuts[count + 1] = h;
-        const positive = new Float64Array((count + 1) * n);
-        const negative = new Float64Array((count + 1) * n);
-        positiveSum.writeTo(positive, 0);
-        negativeSum.writeTo(negative, 0);
-        for (let s = 1; s <= count; s++) {
-          const p = owners[s - 1]!;
-          const coef = pieces[p]!.curve.coef;
-          (sides[p]! > 0 ? positiveSum : negativeSum).add(coef, o, -1);
-          (sides[p]! > 0 ? negativeSum : positiveSum).add(coef, o, 1);
-          sides[p] = -sides[p]!;
-          positiveSum.writeTo(positive, s * n);
-          negativeSum.writeTo(negative, s * n);
-        }
-        perInterval.push({ cuts, positive, negative });
-      }
-      return perInterval;
-    });
+    splits[quantity] = analysis.cases.map((loadCase) => (loadCase.pattern ? splitPatternedCase(loadCase.pieces, grid, offset, degree) : null));
   }
   const ends = {} as EnvelopeExtremesContext["ends"];
   const stride = 3 * analysis.cases.length;
@@ -108,6 +42,75 @@ export function prepareEnvelopeExtremes(analysis: Analysis): EnvelopeExtremesCon
     ends[quantity] = values;
   }
   return { analysis, splits, ends };
+}
+
+/**
+ * The sign splits of one quantity (its polynomial at `offset`, of `degree`) of a patterned case's
+ * span pieces, per grid interval. Pieces that keep their sign on an interval go to one side once.
+ * Each other piece starts on the side of its sign left of its first root and changes side at each
+ * of its roots (all sign changes): never read near a root, where its sign is rounding noise.
+ */
+function splitPatternedCase(pieces: AnalysisCase["pieces"], grid: Float64Array, offset: number, degree: number): PatternSplit[] {
+  const n = degree + 1;
+  const own = new Float64Array(degree);
+  // work arrays for one interval at a time: sign-change roots ascending, with the piece of each
+  const roots = new Float64Array(pieces.length * degree);
+  const owners = new Int32Array(pieces.length * degree);
+  const sides = new Int8Array(pieces.length);
+  // running sums of the pieces on each side, with Neumaier compensation: a piece added and later
+  // taken away again must not leave its rounding behind (sums can be far smaller than the pieces
+  // that passed through them)
+  const positiveSum = new CompensatedSums(n);
+  const negativeSum = new CompensatedSums(n);
+  const perInterval: PatternSplit[] = [];
+  for (let k = 0; k + 1 < grid.length; k++) {
+    const h = grid[k + 1]! - grid[k]!;
+    const o = k * COEFFICIENTS_PER_INTERVAL + offset;
+    positiveSum.clear();
+    negativeSum.clear();
+    let count = 0;
+    for (let p = 0; p < pieces.length; p++) {
+      const coef = pieces[p]!.curve.coef;
+      if (keepsSign(coef, o, degree, h)) {
+        (coef[o]! > 0 ? positiveSum : negativeSum).add(coef, o, 1);
+        continue;
+      }
+      const found = signChangesInto(coef, o, degree, 0, h, own);
+      const side = initialSide(coef, o, degree, h, own, found);
+      sides[p] = side;
+      (side > 0 ? positiveSum : negativeSum).add(coef, o, 1);
+      // insertion into the sorted roots (a few dozen per interval; ties keep piece order)
+      for (let r = 0; r < found; r++) {
+        let at = count++;
+        while (at > 0 && roots[at - 1]! > own[r]!) {
+          roots[at] = roots[at - 1]!;
+          owners[at] = owners[at - 1]!;
+          at--;
+        }
+        roots[at] = own[r]!;
+        owners[at] = p;
+      }
+    }
+    const cuts: number[] = new Array(count + 2);
+    cuts[0] = 0;
+    for (let r = 0; r < count; r++) cuts[r + 1] = roots[r]!;
+    cuts[count + 1] = h;
+    const positive = new Float64Array((count + 1) * n);
+    const negative = new Float64Array((count + 1) * n);
+    positiveSum.writeTo(positive, 0);
+    negativeSum.writeTo(negative, 0);
+    for (let s = 1; s <= count; s++) {
+      const p = owners[s - 1]!;
+      const coef = pieces[p]!.curve.coef;
+      (sides[p]! > 0 ? positiveSum : negativeSum).add(coef, o, -1);
+      (sides[p]! > 0 ? negativeSum : positiveSum).add(coef, o, 1);
+      sides[p] = -sides[p]!;
+      positiveSum.writeTo(positive, s * n);
+      negativeSum.writeTo(negative, s * n);
+    }
+    perInterval.push({ cuts, positive, negative });
+  }
+  return perInterval;
 }
 
 /** n running sums with Neumaier's compensation (each sum carries the rounding it has dropped). */
