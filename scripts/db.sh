@@ -7,7 +7,9 @@
 set -euo pipefail
 
 ROOT=$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)
-PORT=${SPANWRIGHT_PG_PORT:-55432}
+# below Linux's ephemeral range (32768–60999): a client connection's local port can never be holding
+# it when the server starts
+PORT=${SPANWRIGHT_PG_PORT:-15432}
 KEY=$(printf '%s' "$ROOT" | sha1sum | cut -c1-12)
 if [ "$(id -u)" = 0 ]; then
   DEFAULT_BASE=/var/lib/spanwright/$KEY

@@ -3,7 +3,7 @@ import { fileURLToPath } from "node:url";
 import { z } from "zod";
 
 const here = path.dirname(fileURLToPath(import.meta.url));
-const defaultPgPort = process.env.SPANWRIGHT_PG_PORT ?? "55432";
+const defaultPgPort = process.env.SPANWRIGHT_PG_PORT ?? "15432";
 
 const envSchema = z.object({
   NODE_ENV: z.enum(["development", "production", "test"]).default("development"),

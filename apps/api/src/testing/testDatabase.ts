@@ -1,7 +1,7 @@
 import { randomBytes } from "node:crypto";
 import postgres from "postgres";
 
-const port = () => process.env.SPANWRIGHT_PG_PORT ?? "55432";
+const port = () => process.env.SPANWRIGHT_PG_PORT ?? "15432";
 
 /** The maintenance database on the project's cluster, as superuser `spanwright` (trust on loopback). */
 export const adminUrl = (): string => `postgres://spanwright@127.0.0.1:${port()}/postgres`;
