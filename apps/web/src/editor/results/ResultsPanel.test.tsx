@@ -1,5 +1,5 @@
 import { describe, expect, it, vi } from "vitest";
-import { fireEvent, render, screen, within } from "@testing-library/react";
+import { fireEvent, render, screen, waitFor, within } from "@testing-library/react";
 import { analyze, beamModelSchema } from "@spanwright/solver";
 import { findMaterialPreset } from "@spanwright/solver/design";
 import { setSegmentSection } from "../commands/designCommands";
@@ -24,10 +24,15 @@ describe("the results area", () => {
     );
     // The section view is keyboard-reachable: typing x works like clicking the diagrams.
     // (the section view and the checks are chunks of their own: lazyDesign.ts)
-    const x = await screen.findByLabelText(/^Section view x/);
-    fireEvent.change(x, { target: { value: "3" } });
-    fireEvent.keyDown(x, { key: "Enter" });
-    expect(store.getState().ui.sectionX).toBe(3);
+    // The field arrives with its lazy chunk; on a busy machine the first keystrokes can land
+    // before it has settled, so the typing is retried until it takes (as a user would retype).
+    await screen.findByLabelText(/^Section view x/);
+    await waitFor(() => {
+      const x = screen.getByLabelText(/^Section view x/);
+      fireEvent.change(x, { target: { value: "3" } });
+      fireEvent.keyDown(x, { key: "Enter" });
+      expect(store.getState().ui.sectionX).toBe(3);
+    });
     expect(screen.getByText(/an envelope has no single moment at x/)).toBeTruthy();
     expect(screen.queryByRole("table", { name: "Member checks" })).toBeNull();
     fireEvent.click(screen.getByRole("button", { name: "Checks" }));
