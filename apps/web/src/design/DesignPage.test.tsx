@@ -1,5 +1,6 @@
 import { afterEach, describe, expect, it, vi } from "vitest";
 import { fireEvent, screen, waitFor, within } from "@testing-library/react";
+import { simpleSpanDeadLive } from "../test/designFixtures";
 import { renderRoutes, stubFetch } from "../test/renderWithProviders";
 import { DesignPage } from "./DesignPage";
 
@@ -12,20 +13,7 @@ const beamId = "c4d2e8f1-7a3b-4c5d-9e6f-2a1b3c4d5e6f";
 const when = "2026-11-30T09:00:00.000Z";
 
 /** Invented beam: a 7 m simple span at an imaginary warehouse mezzanine, dead and live cases. */
-const model = {
-  format: "spanwright.beam/1",
-  title: "Mezzanine edge beam",
-  nodes: [
-    { x: 0, support: { type: "pinned" } },
-    { x: 7, support: { type: "pinned" } },
-  ],
-  segments: [{ E: 200e9, I: 2.1e-4 }],
-  loadCases: [
-    { id: "D", category: "dead", loads: [{ type: "distributed", x1: 0, x2: 7, qy1: -8e3, qy2: -8e3 }] },
-    { id: "L", category: "live", loads: [{ type: "distributed", x1: 0, x2: 7, qy1: -12e3, qy2: -12e3 }] },
-  ],
-  combinations: [{ id: "C1", factors: { D: 1.2, L: 1.6 } }],
-};
+const model = simpleSpanDeadLive({ title: "Mezzanine edge beam", span: 7, dead: 8e3, live: 12e3, I: 2.1e-4, combinations: [{ id: "C1", factors: { D: 1.2, L: 1.6 } }] });
 
 function answers(role = "owner", designSettings: unknown = null) {
   return {

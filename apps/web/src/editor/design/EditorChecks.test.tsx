@@ -2,11 +2,12 @@ import { useState } from "react";
 import { afterEach, describe, expect, it, vi } from "vitest";
 import { fireEvent, screen, waitFor, within } from "@testing-library/react";
 import { analyze, beamModelSchema } from "@spanwright/solver";
-import { findMaterialPreset, type IShape } from "@spanwright/solver/design";
+import { findMaterialPreset } from "@spanwright/solver/design";
+import { simpleSpanDeadLive, wShape } from "../../test/designFixtures";
 import { renderRoutes, stubFetch } from "../../test/renderWithProviders";
 import { setSegmentSection } from "../commands/designCommands";
 import type { BeamDocument } from "../model/BeamDocument";
-import { fromExchange, toExchange, type ExchangeModel } from "../model/exchange";
+import { fromExchange, toExchange } from "../model/exchange";
 import { EditorChecks } from "./EditorChecks";
 
 afterEach(() => {
@@ -20,19 +21,7 @@ const when = "2026-11-30T09:00:00.000Z";
 const steel = findMaterialPreset("steel-a992")!;
 
 /** Invented demo beam: one 6 m simple span, uniform dead 10 kN/m and live 15 kN/m, 1.2D + 1.6L. */
-const demo: ExchangeModel = {
-  format: "spanwright.beam/1",
-  nodes: [
-    { x: 0, support: { type: "pinned" } },
-    { x: 6, support: { type: "pinned" } },
-  ],
-  segments: [{ E: 200e9, I: 1e-4 }],
-  loadCases: [
-    { id: "D", category: "dead", loads: [{ type: "distributed", x1: 0, x2: 6, qy1: -10e3, qy2: -10e3 }] },
-    { id: "L", category: "live", loads: [{ type: "distributed", x1: 0, x2: 6, qy1: -15e3, qy2: -15e3 }] },
-  ],
-  combinations: [{ id: "LRFD2", factors: { D: 1.2, L: 1.6 } }],
-};
+const demo = simpleSpanDeadLive({ span: 6, dead: 10e3, live: 15e3, I: 1e-4, combinations: [{ id: "LRFD2", factors: { D: 1.2, L: 1.6 } }] });
 
 /** The beam as it opens after a reload: the segments' sections stay with a session, so none has one. */
 function reloaded(): BeamDocument {
@@ -41,8 +30,6 @@ function reloaded(): BeamDocument {
   return r.doc;
 }
 
-// Plates of a W410×46-like rolled shape (approximate, from memory); invented demo values.
-const wShape: IShape = { kind: "i-shape", d: 0.403, bf: 0.14, tf: 0.0112, tw: 0.007 };
 
 function withSegmentSection(doc: BeamDocument): BeamDocument {
   const r = setSegmentSection(doc, { segmentIds: [doc.segments[0]!.id], shape: wShape, material: steel });

@@ -2,7 +2,8 @@ import { describe, expect, it } from "vitest";
 import { fireEvent, render, screen, within } from "@testing-library/react";
 import type { ReactNode } from "react";
 import { analyze, beamModelSchema } from "@spanwright/solver";
-import { findMaterialPreset, type IShape } from "@spanwright/solver/design";
+import { findMaterialPreset } from "@spanwright/solver/design";
+import { simpleSpanDeadLive, wShape } from "../../test/designFixtures";
 import { setSegmentSection } from "../commands/designCommands";
 import type { BeamDocument } from "../model/BeamDocument";
 import { fromExchange, toExchange, type ExchangeModel } from "../model/exchange";
@@ -13,25 +14,12 @@ import { SegmentsTable } from "../tables/SegmentsTable";
 import { EditorChecks } from "./EditorChecks";
 import { SectionAtCursor } from "./SectionAtCursor";
 
-// Plates of a W410×46-like rolled shape (approximate, from memory); the expected numbers below are
-// hand calculations on this invented demo beam, not table values.
-const wShape: IShape = { kind: "i-shape", d: 0.403, bf: 0.14, tf: 0.0112, tw: 0.007 };
+// wShape: plates of a W410×46-like rolled shape (approximate, from memory); the expected numbers
+// below are hand calculations on this invented demo beam, not table values.
 const steel = findMaterialPreset("steel-a992")!;
 
 /** Invented demo beam: one 6 m simple span, uniform dead 10 kN/m and live 15 kN/m. */
-const demo: ExchangeModel = {
-  format: "spanwright.beam/1",
-  nodes: [
-    { x: 0, support: { type: "pinned" } },
-    { x: 6, support: { type: "pinned" } },
-  ],
-  segments: [{ E: 200e9, I: 1e-4 }],
-  loadCases: [
-    { id: "D", category: "dead", loads: [{ type: "distributed", x1: 0, x2: 6, qy1: -10e3, qy2: -10e3 }] },
-    { id: "L", category: "live", loads: [{ type: "distributed", x1: 0, x2: 6, qy1: -15e3, qy2: -15e3 }] },
-  ],
-  combinations: [],
-};
+const demo = simpleSpanDeadLive({ span: 6, dead: 10e3, live: 15e3, I: 1e-4, combinations: [] });
 
 function demoDocument(combinations: ExchangeModel["combinations"] = []): BeamDocument {
   const r = fromExchange({ ...demo, combinations });
