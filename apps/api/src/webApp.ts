@@ -17,8 +17,10 @@ const OTHER_FILE_MAX_AGE_S = 3600;
 /** gzip (or deflate) for text responses over 1 kB, negotiated with Accept-Encoding. */
 export const compressResponses = compression({ threshold: 1024 });
 
-/** The beam editor's URL (the web app's router: "projects/:projectId/beams/:beamId"). */
-const EDITOR_PATH = /^\/projects\/[^/]+\/beams\/[^/]+\/?$/;
+/** The beam editor's URL (the web app's router: "projects/:projectId/beams/:beamId"), its ids captured. */
+const EDITOR_PATH = /^\/projects\/([^/]+)\/beams\/([^/]+)\/?$/;
+/** Ids of plain URL characters: they need no escaping in HTML and read back the same. */
+const PLAIN_ID = /^[A-Za-z0-9_-]+$/;
 /** The editor's chunk in Vite's manifest (dist/.vite/manifest.json), keyed by its source path. */
 const EDITOR_SOURCE = "src/editor/BeamEditorPage.tsx";
 
@@ -54,13 +56,11 @@ function editorHtml(indexHtml: string, manifest: Manifest): string {
 
 /**
  * The editor's first requests (the user, the project, the beam: boot.ts asks for the same URLs) as
- * fetch preloads, so they start with the HTML instead of once boot.ts has run. Only for ids of
- * plain URL characters, which need no escaping here and read back the same.
+ * fetch preloads, so they start with the HTML instead of once boot.ts has run. Only for
+ * plain ids (`PLAIN_ID`).
  */
-function withDataPreloads(html: string, pathname: string): string {
-  const match = /^\/projects\/([A-Za-z0-9_-]+)\/beams\/([A-Za-z0-9_-]+)\/?$/.exec(pathname);
-  if (!match) return html;
-  const [, projectId, beamId] = match as unknown as [string, string, string];
+function withDataPreloads(html: string, projectId: string, beamId: string): string {
+  if (!PLAIN_ID.test(projectId) || !PLAIN_ID.test(beamId)) return html;
   const urls = [routePath("me"), routePath("getProject", { projectId }), routePath("getBeam", { projectId, beamId })];
   const links = urls.map((url) => `<link rel="preload" as="fetch" crossorigin href="${url}">`).join("\n    ");
   return html.replace("<head>", `<head>\n    ${links}`);
@@ -94,7 +94,8 @@ export function serveWebApp(app: Express, distDir: string): void {
     if ((req.method !== "GET" && req.method !== "HEAD") || req.path === "/api" || req.path.startsWith("/api/")) return next();
     if (!fs.existsSync(indexHtml)) return next();
     res.setHeader("Cache-Control", INDEX_HTML_CACHE);
-    if (EDITOR_PATH.test(req.path)) res.type("html").send(withDataPreloads(editorPageHtml(), req.path));
+    const editor = EDITOR_PATH.exec(req.path);
+    if (editor) res.type("html").send(withDataPreloads(editorPageHtml(), editor[1]!, editor[2]!));
     else res.sendFile(indexHtml);
   });
 }

@@ -77,6 +77,7 @@ export function findRigidMotion(model: BeamModel, dofs: DofMap): Float64Array | 
     addToBanded(normal, 2 * p, 2 * p, 1);
     addToBanded(normal, 2 * p + 1, 2 * p + 1, 1);
   }
+  // ends by a tolerance of 1 at the latest: no pivot exceeds its own diagonal entry
   for (let tolerance = 1e-12; ; tolerance *= 10) {
     const loose = factorBanded(normal, tolerance);
     if (!loose.ok) return toDofVector(model, dofs, partStart, partOfNode, loose.mode, length);
@@ -91,7 +92,7 @@ export function findRigidMotion(model: BeamModel, dofs: DofMap): Float64Array | 
  * never held can move: with at most one independent restraint per free part plus the hinges
  * between them, the free parts have fewer constraints than freedoms.
  */
-export function heldParts(model: BeamModel, partStart: number[], partOfNode: Int32Array): boolean[] {
+function heldParts(model: BeamModel, partStart: number[], partOfNode: Int32Array): boolean[] {
   const nodes = model.nodes;
   const n = nodes.length;
   const parts = partStart.length;

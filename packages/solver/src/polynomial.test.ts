@@ -1,5 +1,11 @@
 import { describe, expect, it } from "vitest";
-import { evaluatePolynomial, findSignChanges } from "./polynomial.js";
+import { evaluatePolynomial, signChangesInto } from "./polynomial.js";
+
+/** The roots signChangesInto writes, as an array. */
+function findSignChanges(coef: number[], offset: number, degree: number, lo: number, hi: number): number[] {
+  const out = new Float64Array(degree);
+  return Array.from(out.subarray(0, signChangesInto(coef, offset, degree, lo, hi, out)));
+}
 
 describe("evaluatePolynomial", () => {
   it.each([

@@ -24,20 +24,12 @@ const derivatives: Float64Array[] = [];
 const criticals: Float64Array[] = [];
 
 /**
- * The real roots strictly inside (lo, hi) where the polynomial changes sign, ascending.
- * Isolation by recursion on the derivative (between consecutive critical points the polynomial
- * is monotone, so each sign change holds exactly one root), then safeguarded regula falsi
- * (Illinois) to full double precision. Roots without a sign change (even multiplicity) are
- * skipped on purpose: callers use them to find extremes and sign changes, where they do not count.
- */
-export function findSignChanges(coef: ArrayLike<number>, offset: number, degree: number, lo: number, hi: number): number[] {
-  const out = new Float64Array(Math.max(degree, 1));
-  return Array.from(out.subarray(0, signChangesInto(coef, offset, degree, lo, hi, out)));
-}
-
-/**
- * `findSignChanges` without allocating: writes the roots into `out` (length ≥ degree) from index 0
- * and returns how many there are. `out` must not be `coef`.
+ * The real roots strictly inside (lo, hi) where the polynomial changes sign, ascending, written
+ * into `out` (length ≥ degree, not `coef`) from index 0; returns how many there are. Isolation by
+ * recursion on the derivative (between consecutive critical points the polynomial is monotone, so
+ * each sign change holds exactly one root), then safeguarded regula falsi (Illinois) to full double
+ * precision. Roots without a sign change (even multiplicity) are skipped on purpose: callers use
+ * them to find extremes and sign changes, where they do not count. Allocates nothing.
  */
 export function signChangesInto(coef: ArrayLike<number>, offset: number, degree: number, lo: number, hi: number, out: Float64Array): number {
   let d = degree;
