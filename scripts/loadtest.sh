@@ -14,7 +14,9 @@ DB_NAME="spanwright_load_$(date +%s)_$$"
 LOG=$(mktemp /tmp/spanwright-loadtest-XXXXXX.log)
 server_pid=
 cleanup() {
-  trap - INT TERM EXIT
+  # a second Ctrl-C (or a forwarded signal) must not cut the clean-up short: ignore them from here
+  trap "" INT TERM
+  trap - EXIT
   if [ -n "$server_pid" ]; then kill "$server_pid" 2>/dev/null || true; wait "$server_pid" 2>/dev/null || true; fi
   bash scripts/db.sh dropdb "$DB_NAME" >/dev/null 2>&1 || true
   [ -n "$started_db" ] && bash scripts/db.sh stop || true

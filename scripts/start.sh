@@ -19,7 +19,9 @@ export OUTBOX_ENABLED=${OUTBOX_ENABLED:-true}
 
 api_pid=
 cleanup() {
-  trap - INT TERM EXIT
+  # a second Ctrl-C (or a forwarded signal) must not cut the clean-up short: ignore them from here
+  trap "" INT TERM
+  trap - EXIT
   [ -n "$api_pid" ] && kill "$api_pid" 2>/dev/null && wait "$api_pid" 2>/dev/null || true
   [ -n "$started_db" ] && bash scripts/db.sh stop || true
 }
