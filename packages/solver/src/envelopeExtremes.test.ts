@@ -1,6 +1,9 @@
 import { describe, expect, it } from "vitest";
 import type { Analysis, Curve } from "./analysisTypes.js";
+import { analyze } from "./analyze.js";
+import { beamModelSchema } from "./beamModelSchema.js";
 import { prepareEnvelopeExtremes } from "./envelopeExtremes.js";
+import { ENVELOPE_QUANTITIES, evaluateCaseParts } from "./envelopeQueries.js";
 import { COEFFICIENTS_PER_INTERVAL, V_OFFSET } from "./segmentField.js";
 
 /** A curve on one interval whose shear is c₀ + c₁u (other quantities zero). */
@@ -39,7 +42,7 @@ describe("sign splits of a patterned case", () => {
     const split = prepareEnvelopeExtremes(patternedAnalysis([a, b])).splits.V[0]![0]!;
     expect(split.cuts).toEqual([0, r, r2, 4]);
     const n = 3; // V has degree 2
-    const sub = (s: number, side: Float64Array) => Array.from(side.subarray(s * n, s * n + n));
+    const sub = (s: number, side: Float64Array) => Array.from(side.subarray(split.at + s * n, split.at + s * n + n));
     expect(sub(0, split.positive)).toEqual([0, 0, 0]);
     expect(sub(0, split.negative)).toEqual([-r - 2 * r2, 3, 0]);
     expect(sub(2, split.positive)).toEqual([-r - 2 * r2, 3, 0]);
@@ -56,7 +59,49 @@ describe("sign splits of a patterned case", () => {
     const split = prepareEnvelopeExtremes(patternedAnalysis([a, one, c])).splits.V[0]![0]!;
     expect(split.cuts).toEqual([0, 0.25, 0.5, 4]);
     const n = 3;
-    expect(Array.from(split.positive.subarray(2 * n, 3 * n))).toEqual([1, 0, 0]);
-    expect(Array.from(split.negative.subarray(2 * n, 3 * n))).toEqual([(3 * big) / 4, -2 * big, 0]);
+    expect(Array.from(split.positive.subarray(split.at + 2 * n, split.at + 3 * n))).toEqual([1, 0, 0]);
+    expect(Array.from(split.negative.subarray(split.at + 2 * n, split.at + 3 * n))).toEqual([(3 * big) / 4, -2 * big, 0]);
+  });
+});
+
+describe("interval ranges of the cases", () => {
+  // An invented three-span beam with an overhang: a patterned live load, a dead load with a point
+  // load. The ranges prune whole intervals, so each must hold every value of its part (a bound) and
+  // be reached (exact: within rounding of the densest sample).
+  const analysis = analyze(
+    beamModelSchema.parse({
+      format: "spanwright.beam/1",
+      nodes: [{ x: 0, support: { type: "pinned" } }, { x: 5, support: { type: "pinned" } }, { x: 11, support: { type: "pinned" } }, { x: 15, support: { type: "pinned" } }, { x: 17 }],
+      segments: [{ E: 2e11, I: 8e-5 }, { E: 2e11, I: 8e-5 }, { E: 2e11, I: 8e-5 }, { E: 2e11, I: 8e-5 }],
+      loadCases: [
+        { id: "D", category: "dead", loads: [{ type: "distributed", x1: 0, x2: 17, qy1: -10e3, qy2: -10e3 }, { type: "point", x: 7, fy: -30e3 }] },
+        { id: "L", category: "live", pattern: true, loads: [{ type: "distributed", x1: 0, x2: 17, qy1: -20e3, qy2: -5e3 }] },
+      ],
+    }),
+  );
+  const { ranges } = prepareEnvelopeExtremes(analysis);
+  const grid = analysis.grid;
+  const parts = new Float64Array(3 * analysis.cases.length);
+
+  it.each(ENVELOPE_QUANTITIES)("bound and reach the values of every case and part (%s)", (quantity) => {
+    for (let k = 0; k + 1 < grid.length; k++) {
+      const h = grid[k + 1]! - grid[k]!;
+      // per case: [least value, greatest value] for D; [least negative part, greatest positive part] for L
+      const seen = [Infinity, -Infinity, Infinity, -Infinity];
+      for (let i = 0; i <= 4000; i++) {
+        evaluateCaseParts(analysis, k, (h * i) / 4000, quantity, parts);
+        seen[0] = Math.min(seen[0]!, parts[0]!);
+        seen[1] = Math.max(seen[1]!, parts[0]!);
+        seen[2] = Math.min(seen[2]!, parts[5]!);
+        seen[3] = Math.max(seen[3]!, parts[4]!);
+      }
+      const range = ranges[quantity].subarray(4 * k, 4 * k + 4);
+      const scale = Math.max(...seen.map(Math.abs));
+      seen.forEach((value, i) => {
+        const isLeast = i % 2 === 0;
+        expect(isLeast ? range[i]! <= value + 1e-12 * scale : range[i]! >= value - 1e-12 * scale, `${quantity} interval ${k} bound ${i}`).toBe(true);
+        expect(Math.abs(range[i]! - value), `${quantity} interval ${k} bound ${i} reached`).toBeLessThan(1e-6 * scale);
+      });
+    }
   });
 });

@@ -1,7 +1,7 @@
 import type { Analysis, AnalysisCase } from "./analysisTypes.js";
 import { combineParts, envelopeFactorSets, ENVELOPE_QUANTITIES, evaluateCaseParts, type EnvelopeQuantity, type FactorSet } from "./envelopeQueries.js";
 import { QUANTITY_LAYOUT, type Extreme, type Extremes } from "./fieldQueries.js";
-import { evaluatePolynomial, signChangesInto } from "./polynomial.js";
+import { evaluatePolynomial, polynomialRange, signChangesInto, taylorBound } from "./polynomial.js";
 import { COEFFICIENTS_PER_INTERVAL } from "./segmentField.js";
 
 /**
@@ -11,8 +11,16 @@ import { COEFFICIENTS_PER_INTERVAL } from "./segmentField.js";
  */
 export interface PatternSplit {
   cuts: number[];
+  /**
+   * Coefficients of the sums on sub-interval s at `at` + s·(degree + 1). The arrays are shared by
+   * every interval of one case and quantity: one allocation each instead of two per interval.
+   */
   positive: Float64Array;
   negative: Float64Array;
+  at: number;
+  /** The greatest value of the positive part and the least of the negative part on the interval. */
+  positiveMax: number;
+  negativeMin: number;
 }
 
 /** Work shared by every envelope id of one analysis: the sign splits of the patterned cases. */
@@ -22,6 +30,12 @@ export interface EnvelopeExtremesContext {
   splits: Record<EnvelopeQuantity, (PatternSplit[] | null)[]>;
   /** Case parts (`evaluateCaseParts`) at both ends of every interval: [k][end][3·cases]. */
   ends: Record<EnvelopeQuantity, Float64Array>;
+  /**
+   * Per interval and case, [least, greatest] over the interval: of its curve, or for a patterned
+   * case of its negative and positive parts. Summed with a combination's factors they bound its
+   * envelopes on the whole interval, so most intervals are skipped without being split.
+   */
+  ranges: Record<EnvelopeQuantity, Float64Array>;
 }
 
 export function prepareEnvelopeExtremes(analysis: Analysis): EnvelopeExtremesContext {
@@ -41,7 +55,24 @@ export function prepareEnvelopeExtremes(analysis: Analysis): EnvelopeExtremesCon
     }
     ends[quantity] = values;
   }
-  return { analysis, splits, ends };
+  const ranges = {} as EnvelopeExtremesContext["ranges"];
+  const cases = analysis.cases;
+  for (const quantity of ENVELOPE_QUANTITIES) {
+    const { offset, degree } = QUANTITY_LAYOUT[quantity];
+    const values = new Float64Array(2 * (grid.length - 1) * cases.length);
+    for (let k = 0; k + 1 < grid.length; k++) {
+      for (let c = 0; c < cases.length; c++) {
+        const at = 2 * (k * cases.length + c);
+        const split = splits[quantity][c]?.[k];
+        if (split) {
+          values[at] = split.negativeMin;
+          values[at + 1] = split.positiveMax;
+        } else polynomialRange(cases[c]!.curve.coef, k * COEFFICIENTS_PER_INTERVAL + offset, degree, 0, grid[k + 1]! - grid[k]!, values, at);
+      }
+    }
+    ranges[quantity] = values;
+  }
+  return { analysis, splits, ends, ranges };
 }
 
 /**
@@ -63,6 +94,9 @@ function splitPatternedCase(pieces: AnalysisCase["pieces"], grid: Float64Array, 
   const positiveSum = new CompensatedSums(n);
   const negativeSum = new CompensatedSums(n);
   const perInterval: PatternSplit[] = [];
+  let positive = new Float64Array(4 * n * (grid.length - 1));
+  let negative = new Float64Array(positive.length);
+  let used = 0;
   for (let k = 0; k + 1 < grid.length; k++) {
     const h = grid[k + 1]! - grid[k]!;
     const o = k * COEFFICIENTS_PER_INTERVAL + offset;
@@ -95,22 +129,68 @@ function splitPatternedCase(pieces: AnalysisCase["pieces"], grid: Float64Array, 
     cuts[0] = 0;
     for (let r = 0; r < count; r++) cuts[r + 1] = roots[r]!;
     cuts[count + 1] = h;
-    const positive = new Float64Array((count + 1) * n);
-    const negative = new Float64Array((count + 1) * n);
-    positiveSum.writeTo(positive, 0);
-    negativeSum.writeTo(negative, 0);
+    const at = used;
+    used += (count + 1) * n;
+    if (used > positive.length) [positive, negative] = [grown(positive, used), grown(negative, used)];
+    positiveSum.writeTo(positive, at);
+    negativeSum.writeTo(negative, at);
     for (let s = 1; s <= count; s++) {
       const p = owners[s - 1]!;
       const coef = pieces[p]!.curve.coef;
       (sides[p]! > 0 ? positiveSum : negativeSum).add(coef, o, -1);
       (sides[p]! > 0 ? negativeSum : positiveSum).add(coef, o, 1);
       sides[p] = -sides[p]!;
-      positiveSum.writeTo(positive, s * n);
-      negativeSum.writeTo(negative, s * n);
+      positiveSum.writeTo(positive, at + s * n);
+      negativeSum.writeTo(negative, at + s * n);
     }
-    perInterval.push({ cuts, positive, negative });
+    perInterval.push({ cuts, positive, negative, at, positiveMax: 0, negativeMin: 0 });
+  }
+  for (const split of perInterval) {
+    split.positive = positive;
+    split.negative = negative;
+    setPartRanges(split, degree);
   }
   return perInterval;
+}
+
+/** A copy of `values` with room for at least `size` numbers. */
+function grown(values: Float64Array, size: number): Float64Array<ArrayBuffer> {
+  const out = new Float64Array(Math.max(size, 2 * values.length));
+  out.set(values);
+  return out;
+}
+
+const rangeOut = new Float64Array(2);
+
+/**
+ * Sets the split's positiveMax and negativeMin. The values at the cuts come first; a sub-interval is
+ * searched exactly only where its Taylor bound could beat them (the few with an interior peak).
+ */
+function setPartRanges(split: PatternSplit, degree: number): void {
+  const { cuts, positive, negative, at } = split;
+  const n = degree + 1;
+  const last = cuts.length - 2;
+  let max = evaluatePolynomial(positive, at + last * n, degree, cuts[last + 1]!);
+  let min = evaluatePolynomial(negative, at + last * n, degree, cuts[last + 1]!);
+  for (let s = 0; s <= last; s++) {
+    max = Math.max(max, evaluatePolynomial(positive, at + s * n, degree, cuts[s]!));
+    min = Math.min(min, evaluatePolynomial(negative, at + s * n, degree, cuts[s]!));
+  }
+  for (let s = 0; s <= last; s++) {
+    const a = cuts[s]!;
+    const b = cuts[s + 1]!;
+    const o = at + s * n;
+    if (taylorBound(positive, o, degree, a, b, true) > max) {
+      polynomialRange(positive, o, degree, a, b, rangeOut, 0);
+      max = Math.max(max, rangeOut[1]!);
+    }
+    if (taylorBound(negative, o, degree, a, b, false) < min) {
+      polynomialRange(negative, o, degree, a, b, rangeOut, 0);
+      min = Math.min(min, rangeOut[0]!);
+    }
+  }
+  split.positiveMax = max;
+  split.negativeMin = min;
 }
 
 /** n running sums with Neumaier's compensation (each sum carries the rounding it has dropped). */
@@ -229,25 +309,14 @@ function visitFactorSet(context: EnvelopeExtremesContext, factors: FactorSet, qu
   const base = new Float64Array(n);
   const upper = new Float64Array(n);
   const lower = new Float64Array(n);
-  const shifted = new Float64Array(n);
   const derivative = new Float64Array(degree);
   const candidates = new Float64Array(degree + 2);
   const cursor = new Int32Array(patterned.length);
   seedWithBreakpoints(context, factors, quantity, tracker);
   /** Visits the ends and interior stationary points of poly on [a, b] unless a bound rules it out. */
   const visit = (poly: Float64Array, a: number, b: number, x0: number, h: number, x1: number, isUpper: boolean) => {
-    // Taylor coefficients at a: for t in [0, b − a] every tʲ ≥ 0, so d₀ + Σ max(0, dⱼ)(b − a)ʲ
-    // bounds the polynomial from above (min for below); skip when it cannot beat the best so far.
-    shifted.set(poly);
-    for (let i = 0; i < degree; i++) for (let j = degree - 1; j >= i; j--) shifted[j]! += a * shifted[j + 1]!;
-    const w = b - a;
-    let bound = shifted[0]!;
-    let power = 1;
-    for (let j = 1; j <= degree; j++) {
-      power *= w;
-      const term = shifted[j]! * power;
-      bound += isUpper ? Math.max(0, term) : Math.min(0, term);
-    }
+    // skip when a bound of poly on [a, b] cannot beat the best so far
+    const bound = taylorBound(poly, 0, degree, a, b, isUpper);
     if (isUpper ? bound <= tracker.max.value : bound >= tracker.min.value) return;
     for (let i = 1; i <= degree; i++) derivative[i - 1] = i * poly[i]!;
     const stationary = signChangesInto(derivative, 0, degree - 1, a, b, candidates);
@@ -264,7 +333,26 @@ function visitFactorSet(context: EnvelopeExtremesContext, factors: FactorSet, qu
       }
     }
   };
+  const active = factors.filter((f) => f.factor !== 0);
+  const ranges = context.ranges[quantity];
+  const stride = 2 * analysis.cases.length;
   for (let k = 0; k + 1 < grid.length; k++) {
+    // The sum of the factored case ranges bounds both envelopes on the whole interval; the 1e-12
+    // share of the terms covers rounding in the ranges and in this sum.
+    let high = 0;
+    let low = 0;
+    let scale = 0;
+    for (let i = 0; i < active.length; i++) {
+      const { caseIndex, factor } = active[i]!;
+      const least = factor * ranges[k * stride + 2 * caseIndex]!;
+      const greatest = factor * ranges[k * stride + 2 * caseIndex + 1]!;
+      high += Math.max(least, greatest);
+      low += Math.min(least, greatest);
+      scale += Math.abs(least) + Math.abs(greatest);
+    }
+    const wantUpper = high + 1e-12 * scale > tracker.max.value;
+    const wantLower = low - 1e-12 * scale < tracker.min.value;
+    if (!wantUpper && !wantLower) continue;
     const o = k * COEFFICIENTS_PER_INTERVAL + offset;
     const h = grid[k + 1]! - grid[k]!;
     base.fill(0);
@@ -286,7 +374,7 @@ function visitFactorSet(context: EnvelopeExtremesContext, factors: FactorSet, qu
         const factor = patterned[p]!.factor;
         const split = splits[p]!;
         while (split.cuts[cursor[p]! + 1]! < mid) cursor[p]!++;
-        const at = cursor[p]! * n;
+        const at = split.at + cursor[p]! * n;
         const toUpper = factor > 0 ? split.positive : split.negative;
         const toLower = factor > 0 ? split.negative : split.positive;
         for (let i = 0; i < n; i++) {
@@ -294,8 +382,8 @@ function visitFactorSet(context: EnvelopeExtremesContext, factors: FactorSet, qu
           lower[i]! += factor * toLower[at + i]!;
         }
       }
-      visit(upper, a, b, grid[k]!, h, grid[k + 1]!, true);
-      visit(lower, a, b, grid[k]!, h, grid[k + 1]!, false);
+      if (wantUpper) visit(upper, a, b, grid[k]!, h, grid[k + 1]!, true);
+      if (wantLower) visit(lower, a, b, grid[k]!, h, grid[k + 1]!, false);
     }
   }
 }

@@ -96,3 +96,53 @@ function refineRoot(coef: ArrayLike<number>, offset: number, degree: number, a: 
   }
   return x;
 }
+
+const shifted: Float64Array[] = [];
+
+/**
+ * A bound of the polynomial on [lo, hi] from its Taylor coefficients at lo: for t in [0, hi − lo]
+ * every tʲ ≥ 0, so d₀ + Σ max(0, dⱼtʲ) bounds it from above (with min, from below). Cheap, exact
+ * at lo, loose on wide intervals: a filter before the exact search, not a value.
+ */
+export function taylorBound(coef: ArrayLike<number>, offset: number, degree: number, lo: number, hi: number, upper: boolean): number {
+  const d = (shifted[degree] ??= new Float64Array(degree + 1));
+  for (let i = 0; i <= degree; i++) d[i] = coef[offset + i]!;
+  for (let i = 0; i < degree; i++) for (let j = degree - 1; j >= i; j--) d[j]! += lo * d[j + 1]!;
+  const w = hi - lo;
+  let bound = d[0]!;
+  let power = 1;
+  for (let j = 1; j <= degree; j++) {
+    power *= w;
+    const term = d[j]! * power;
+    bound += upper ? Math.max(0, term) : Math.min(0, term);
+  }
+  return bound;
+}
+
+const rangeDerivatives: Float64Array[] = [];
+const rangeRoots: Float64Array[] = [];
+
+/**
+ * The least and greatest values of the polynomial on [lo, hi], written to out[at] and out[at + 1]:
+ * each at an end or at an interior sign change of the derivative. Allocates nothing.
+ */
+export function polynomialRange(coef: ArrayLike<number>, offset: number, degree: number, lo: number, hi: number, out: Float64Array, at: number): void {
+  let min = evaluatePolynomial(coef, offset, degree, lo);
+  let max = min;
+  const end = evaluatePolynomial(coef, offset, degree, hi);
+  if (end < min) min = end;
+  if (end > max) max = end;
+  if (degree >= 2) {
+    const derivative = (rangeDerivatives[degree] ??= new Float64Array(degree));
+    const roots = (rangeRoots[degree] ??= new Float64Array(degree));
+    differentiate(coef, offset, degree, derivative);
+    const count = signChangesInto(derivative, 0, degree - 1, lo, hi, roots);
+    for (let i = 0; i < count; i++) {
+      const v = evaluatePolynomial(coef, offset, degree, roots[i]!);
+      if (v < min) min = v;
+      if (v > max) max = v;
+    }
+  }
+  out[at] = min;
+  out[at + 1] = max;
+}

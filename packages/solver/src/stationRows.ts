@@ -224,6 +224,6 @@ function splitParts(split: PatternSplit, degree: number, u: number, out: Float64
   const cuts = split.cuts;
   let s = 0;
   while (s + 2 < cuts.length && u >= cuts[s + 1]!) s++;
-  out[at] = horner(split.positive, s * (degree + 1), degree, u);
-  out[at + 1] = horner(split.negative, s * (degree + 1), degree, u);
+  out[at] = horner(split.positive, split.at + s * (degree + 1), degree, u);
+  out[at + 1] = horner(split.negative, split.at + s * (degree + 1), degree, u);
 }
