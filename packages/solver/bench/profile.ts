@@ -36,10 +36,13 @@ row("prepareEnvelopeExtremes", median(() => prepareEnvelopeExtremes(analysis), 3
 row("envelopeExtremesOf x10", median(() => analysis.combinations.forEach((c) => envelopeExtremesOf(context, envelopeFactorSets(analysis, c.id)!)), 30));
 row("curveExtremes x16", median(() => [...analysis.cases, ...analysis.combinations].forEach((c) => curveExtremes(analysis.grid, c.curve)), 30));
 console.log("grid intervals", analysis.grid.length - 1, "cuts per interval (L, M):", context.splits.M[2]!.map((s) => s.cuts.length).join(","));
-import { placeStations, curveStationRows, envelopeStationRows } from "../src/stationRows.js";
+import { placeStations, curveStationRows, envelopeStationRows, stationValues } from "../src/stationRows.js";
 import { reactionEnvelope } from "../src/envelopeQueries.js";
 const places = placeStations(analysis.grid, analysis.stations);
 row("placeStations", median(() => placeStations(analysis.grid, analysis.stations), 30));
-row("curveStationRows x16", median(() => [...analysis.cases, ...analysis.combinations].forEach((c) => curveStationRows(places, c.curve)), 30));
-row("envelopeStationRows", median(() => envelopeStationRows(analysis, places, context), 30));
+row("stationValues x16", median(() => [...analysis.cases, ...analysis.combinations].forEach((c) => stationValues(places, c.curve)), 30));
+const values = [...analysis.cases, ...analysis.combinations].map((c) => stationValues(places, c.curve));
+row("curveStationRows x16 (rows only)", median(() => [...analysis.cases, ...analysis.combinations].forEach((c, i) => curveStationRows(places, c.curve, values[i])), 30));
+const combinationValues = values.slice(analysis.cases.length);
+row("envelopeStationRows", median(() => envelopeStationRows(analysis, places, context, undefined, combinationValues), 30));
 row("reactionEnvelope x11", median(() => [...analysis.combinations.map((c) => c.id), "*"].forEach((id) => reactionEnvelope(analysis, id)), 30));

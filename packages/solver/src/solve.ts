@@ -4,7 +4,7 @@ import { prepareEnvelopeExtremes, envelopeExtremesOf, type EnvelopeExtremesConte
 import { envelopeFactorSets, reactionEnvelope, type ReactionEnvelope } from "./envelopeQueries.js";
 import { unwrap } from "./errors.js";
 import { curveExtremes, type Extremes } from "./fieldQueries.js";
-import { curveStationRows, envelopeStationRows, placeStations, type EnvelopeStationRow, type StationPlaces, type StationRow } from "./stationRows.js";
+import { curveStationRows, envelopeStationRows, placeStations, stationValues, type EnvelopeStationRow, type StationPlaces, type StationRow } from "./stationRows.js";
 import { validateModel } from "./validateModel.js";
 
 export type { EnvelopeStationRow, StationRow } from "./stationRows.js";
@@ -38,24 +38,24 @@ export interface SolveResult {
   envelopes: Record<string, EnvelopeResult>;
 }
 
-function caseResult(analysis: Analysis, places: StationPlaces, curve: Curve): CaseResult {
+function caseResult(analysis: Analysis, places: StationPlaces, curve: Curve, values: Float64Array): CaseResult {
   const grid = analysis.grid;
   return {
     reactions: analysis.supportedNodes.map((node, r) => ({ node, fy: curve.fy[r]!, mz: curve.mz[r]! })),
     nodes: analysis.nodes.map((node, i) =>
       node.hinge ? { node: i, uy: curve.uy[i]!, rzLeft: curve.rzLeft[i]!, rzRight: curve.rzRight[i]! } : { node: i, uy: curve.uy[i]!, rz: curve.rzRight[i]! },
     ),
-    stations: curveStationRows(places, curve),
+    stations: curveStationRows(places, curve, values),
     extremes: curveExtremes(grid, curve),
   };
 }
 
-function envelopeResults(analysis: Analysis, places: StationPlaces, ids: string[]): Record<string, EnvelopeResult> {
+function envelopeResults(analysis: Analysis, places: StationPlaces, ids: string[], combinationValues: Float64Array[]): Record<string, EnvelopeResult> {
   if (ids.length === 0) return {};
   const context: EnvelopeExtremesContext = prepareEnvelopeExtremes(analysis);
   // envelopeStationRows gives the combinations in order, then "*": the order of ids.
   const peaks = new Float64Array(12 * analysis.combinations.length);
-  const stations = envelopeStationRows(analysis, places, context, peaks);
+  const stations = envelopeStationRows(analysis, places, context, peaks, combinationValues);
   const out: Record<string, EnvelopeResult> = {};
   const perCombination = new Map<string, EnvelopeResult>();
   ids.forEach((id, i) => {
@@ -75,14 +75,26 @@ function worstOf(list: Extremes[]): Extremes {
   return { Mmax: pick("Mmax", true), Mmin: pick("Mmin", false), Vmax: pick("Vmax", true), Vmin: pick("Vmin", false), uyMax: pick("uyMax", true), uyMin: pick("uyMin", false) };
 }
 
+/**
+ * Work space for the station values, reused from solve to solve (nothing returned refers to it): a
+ * large typed array per curve and solve was slow to allocate, and the external memory it counted
+ * brought on full garbage collections.
+ */
+let workspace = new Float64Array(0);
+
 /** Builds the exchange-format result from an analysis. */
 export function buildSolveResult(analysis: Analysis): SolveResult {
   const results: Record<string, CaseResult> = {};
   const places = placeStations(analysis.grid, analysis.stations);
-  for (const c of analysis.cases) results[c.id] = caseResult(analysis, places, c.curve);
-  for (const c of analysis.combinations) results[c.id] = caseResult(analysis, places, c.curve);
+  const size = 4 * places.x.length;
+  if (workspace.length < size * (analysis.combinations.length + 1)) workspace = new Float64Array(size * (analysis.combinations.length + 1));
+  const slot = (i: number) => workspace.subarray(i * size, (i + 1) * size);
+  for (const c of analysis.cases) results[c.id] = caseResult(analysis, places, c.curve, stationValues(places, c.curve, slot(0)));
+  // the combinations' station values also give their envelope rows
+  const combinationValues = analysis.combinations.map((c, i) => stationValues(places, c.curve, slot(i + 1)));
+  analysis.combinations.forEach((c, i) => (results[c.id] = caseResult(analysis, places, c.curve, combinationValues[i]!)));
   const ids = analysis.combinations.length > 0 ? [...analysis.combinations.map((c) => c.id), "*"] : [];
-  return { format: "spanwright.result/1", results, envelopes: envelopeResults(analysis, places, ids) };
+  return { format: "spanwright.result/1", results, envelopes: envelopeResults(analysis, places, ids, combinationValues) };
 }
 
 /**

@@ -86,71 +86,105 @@ class EnvelopeRow implements EnvelopeStationRow {
 
 const EMPTY_PEAKS = [-Infinity, Infinity, -Infinity, Infinity, -Infinity, Infinity, 0, 0, 0, 0, 0, 0];
 
-/** V, M, uy, rz of one curve at every station (Horner inlined: 16 curves × every station). */
-export function curveStationRows(places: StationPlaces, curve: Curve): StationRow[] {
+/**
+ * V, M, uy and rz of one curve at every station, as columns of n numbers at 0, n, 2n and 3n (Horner
+ * inlined: 16 curves × every station). The station rows and the envelope rows both read these.
+ */
+export function stationValues(places: StationPlaces, curve: Curve, out = new Float64Array(4 * places.k.length)): Float64Array {
   const c = curve.coef;
-  const { x, k, u: local } = places;
+  const { k, u: local } = places;
+  const n = k.length;
   const [stride, vAt, mAt, yAt, rAt] = LAYOUT;
-  const rows: StationRow[] = new Array(x.length);
-  for (let i = 0; i < rows.length; i++) {
+  for (let i = 0; i < n; i++) {
     const o = k[i]! * stride;
     const u = local[i]!;
     const v = o + vAt;
     const m = o + mAt;
     const y = o + yAt;
     const r = o + rAt;
-    rows[i] = new Row(
-      x[i]!,
-      (c[v + 2]! * u + c[v + 1]!) * u + c[v]!,
-      ((c[m + 3]! * u + c[m + 2]!) * u + c[m + 1]!) * u + c[m]!,
-      ((((c[y + 5]! * u + c[y + 4]!) * u + c[y + 3]!) * u + c[y + 2]!) * u + c[y + 1]!) * u + c[y]!,
-      (((c[r + 4]! * u + c[r + 3]!) * u + c[r + 2]!) * u + c[r + 1]!) * u + c[r]!,
-    );
+    out[i] = (c[v + 2]! * u + c[v + 1]!) * u + c[v]!;
+    out[n + i] = ((c[m + 3]! * u + c[m + 2]!) * u + c[m + 1]!) * u + c[m]!;
+    out[2 * n + i] = ((((c[y + 5]! * u + c[y + 4]!) * u + c[y + 3]!) * u + c[y + 2]!) * u + c[y + 1]!) * u + c[y]!;
+    out[3 * n + i] = (((c[r + 4]! * u + c[r + 3]!) * u + c[r + 2]!) * u + c[r + 1]!) * u + c[r]!;
   }
+  return out;
+}
+
+/** The station rows of one curve (from its `stationValues`, computed here unless given). */
+export function curveStationRows(places: StationPlaces, curve: Curve, values: Float64Array = stationValues(places, curve)): StationRow[] {
+  const x = places.x;
+  const n = x.length;
+  const rows: StationRow[] = new Array(n);
+  for (let i = 0; i < n; i++) rows[i] = new Row(x[i]!, values[i]!, values[n + i]!, values[2 * n + i]!, values[3 * n + i]!);
   return rows;
 }
 
 /**
  * Envelope rows of every combination and of "*" (last), at every station, from each combination's
- * own value (its curve: every case at full value). A combination's envelope
- * differs from its own value only by its patterned cases: for each, the value holds f·(positive +
- * negative) where the worst arrangement holds only the adverse part, so max = value − Σ min(f·positive,
- * f·negative) and min = value − Σ max(…). The parts of the patterned cases are evaluated once per
- * station and shared by every combination; "*" is the worst of the combination rows, which is its
- * definition. With `peaks` (12 numbers per combination), also writes each combination's best
- * sampled Vmax, Vmin, Mmax, Mmin, uyMax, uyMin and then their x (the seeds of `envelopeExtremesOf`).
+ * own value (its `stationValues`: every case at full value; computed here unless given). A
+ * combination's envelope differs from its own value only by its patterned cases: for each, the
+ * value holds f·(positive + negative) where the worst arrangement holds only the adverse part, so
+ * max = value − Σ min(f·positive, f·negative) and min = value − Σ max(…). The parts of the patterned
+ * cases are evaluated once per station and shared by every combination; "*" is the worst of the
+ * combination rows, which is its definition. With `peaks` (12 numbers per combination), also writes
+ * each combination's best sampled Vmax, Vmin, Mmax, Mmin, uyMax, uyMin and then their x (the seeds
+ * of `envelopeExtremesOf`).
  */
 export function envelopeStationRows(
   analysis: Analysis,
   places: StationPlaces,
   context: EnvelopeExtremesContext = prepareEnvelopeExtremes(analysis),
   peaks?: Float64Array,
+  combinationValues: Float64Array[] = analysis.combinations.map((c) => stationValues(places, c.curve)),
 ): EnvelopeStationRow[][] {
   if (peaks) for (let p = 0; p + 12 <= peaks.length; p += 12) peaks.set(EMPTY_PEAKS, p);
-  const nc = analysis.cases.length;
   const combos = analysis.combinations;
-  // per combination, only its patterned factors: [case index, factor] pairs
+  const patternedCases = analysis.cases.flatMap((c, i) => (c.pattern ? [i] : []));
+  // per combination, its patterned factors: the case's place in patternedCases, the factor, and
+  // which part (0 positive, 1 negative) is min(f·positive, f·negative), the one taken off for max
   const starts = new Int32Array(combos.length + 1);
   const patternedFactors = combos.map((c) => c.factors.filter((f) => f.factor !== 0 && analysis.cases[f.caseIndex]!.pattern));
   patternedFactors.forEach((list, i) => (starts[i + 1] = starts[i]! + list.length));
-  const caseIndex = new Int32Array(starts[combos.length]!);
+  const place = new Int32Array(starts[combos.length]!);
   const factor = new Float64Array(starts[combos.length]!);
-  patternedFactors.forEach((list, i) => list.forEach((f, j) => ((caseIndex[starts[i]! + j] = f.caseIndex), (factor[starts[i]! + j] = f.factor))));
-  const patternedCases = analysis.cases.flatMap((c, i) => (c.pattern ? [i] : []));
-  const parts = new Float64Array(6 * nc);
+  const forMax = new Int32Array(starts[combos.length]!);
+  patternedFactors.forEach((list, i) =>
+    list.forEach((f, j) => {
+      place[starts[i]! + j] = patternedCases.indexOf(f.caseIndex);
+      factor[starts[i]! + j] = f.factor;
+      forMax[starts[i]! + j] = f.factor > 0 ? 1 : 0;
+    }),
+  );
   const n = places.x.length;
-  const [stride, vAt, mAt, yAt] = LAYOUT;
-  const coefs = combos.map((c) => c.curve.coef);
-  const rows: EnvelopeStationRow[][] = Array.from({ length: combos.length + 1 }, () => new Array(n));
   const { splits } = context;
+  const quantitySplits = [splits.V, splits.M, splits.uy];
+  const degrees = [2, 3, 5];
+  // parts[6p..6p+5]: positive and negative parts of V, M, uy of the p-th patterned case; cursor:
+  // the sub-interval of each (case, quantity) split at the last station
+  const parts = new Float64Array(6 * patternedCases.length);
+  const cursor = new Int32Array(3 * patternedCases.length);
+  let lastK = -1;
+  let lastU = Infinity;
+  const rows: EnvelopeStationRow[][] = Array.from({ length: combos.length + 1 }, () => new Array(n));
   for (let s = 0; s < n; s++) {
     const k = places.k[s]!;
     const u = places.u[s]!;
-    // parts[6c..6c+5]: positive and negative parts of V, M, uy of patterned case c
-    for (const c of patternedCases) {
-      splitParts(splits.V[c]![k]!, 2, u, parts, 6 * c);
-      splitParts(splits.M[c]![k]!, 3, u, parts, 6 * c + 2);
-      splitParts(splits.uy[c]![k]!, 5, u, parts, 6 * c + 4);
+    // stations usually ascend: the cursors move on; anything else starts them again
+    if (k !== lastK || u < lastU) cursor.fill(0);
+    lastK = k;
+    lastU = u;
+    for (let p = 0; p < patternedCases.length; p++) {
+      for (let q = 0; q < 3; q++) {
+        const split = quantitySplits[q]![patternedCases[p]!]![k]!;
+        const cuts = split.cuts;
+        let sub = cursor[3 * p + q]!;
+        while (sub + 2 < cuts.length && u >= cuts[sub + 1]!) sub++;
+        cursor[3 * p + q] = sub;
+        const degree = degrees[q]!;
+        const o = split.at + sub * (degree + 1);
+        parts[6 * p + 2 * q] = horner(split.positive, o, degree, u);
+        parts[6 * p + 2 * q + 1] = horner(split.negative, o, degree, u);
+      }
     }
     const x = places.x[s]!;
     let starVMax = -Infinity;
@@ -159,33 +193,25 @@ export function envelopeStationRows(
     let starMMin = Infinity;
     let starYMax = -Infinity;
     let starYMin = Infinity;
-    const v = k * stride + vAt;
-    const m = k * stride + mAt;
-    const y = k * stride + yAt;
     for (let c = 0; c < combos.length; c++) {
-      // the combination's own value, as its station row has it (same expressions)
-      const co = coefs[c]!;
-      let vMax = (co[v + 2]! * u + co[v + 1]!) * u + co[v]!;
-      let mMax = ((co[m + 3]! * u + co[m + 2]!) * u + co[m + 1]!) * u + co[m]!;
-      let yMax = ((((co[y + 5]! * u + co[y + 4]!) * u + co[y + 3]!) * u + co[y + 2]!) * u + co[y + 1]!) * u + co[y]!;
+      const own = combinationValues[c]!;
+      let vMax = own[s]!;
+      let mMax = own[n + s]!;
+      let yMax = own[2 * n + s]!;
       let vMin = vMax;
       let mMin = mMax;
       let yMin = yMax;
       for (let j = starts[c]!; j < starts[c + 1]!; j++) {
-        const at = 6 * caseIndex[j]!;
+        const at = 6 * place[j]!;
         const f = factor[j]!;
-        let positive = f * parts[at]!;
-        let negative = f * parts[at + 1]!;
-        vMax -= Math.min(positive, negative);
-        vMin -= Math.max(positive, negative);
-        positive = f * parts[at + 2]!;
-        negative = f * parts[at + 3]!;
-        mMax -= Math.min(positive, negative);
-        mMin -= Math.max(positive, negative);
-        positive = f * parts[at + 4]!;
-        negative = f * parts[at + 5]!;
-        yMax -= Math.min(positive, negative);
-        yMin -= Math.max(positive, negative);
+        const taken = forMax[j]!;
+        const kept = 1 - taken;
+        vMax -= f * parts[at + taken]!;
+        vMin -= f * parts[at + kept]!;
+        mMax -= f * parts[at + 2 + taken]!;
+        mMin -= f * parts[at + 2 + kept]!;
+        yMax -= f * parts[at + 4 + taken]!;
+        yMin -= f * parts[at + 4 + kept]!;
       }
       rows[c]![s] = new EnvelopeRow(x, mMax, mMin, vMax, vMin, yMax, yMin);
       if (peaks) {
@@ -213,17 +239,4 @@ function horner(coef: Float64Array, o: number, degree: number, u: number): numbe
   let v = coef[o + degree]!;
   for (let i = degree - 1; i >= 0; i--) v = v * u + coef[o + i]!;
   return v;
-}
-
-/**
- * The positive and negative parts of a patterned case's quantity at u of an interval, from its
- * sign split: inside a sub-interval no piece changes sign, so the parts are the sums of pieces by
- * sign, added before evaluation instead of after.
- */
-function splitParts(split: PatternSplit, degree: number, u: number, out: Float64Array, at: number): void {
-  const cuts = split.cuts;
-  let s = 0;
-  while (s + 2 < cuts.length && u >= cuts[s + 1]!) s++;
-  out[at] = horner(split.positive, split.at + s * (degree + 1), degree, u);
-  out[at + 1] = horner(split.negative, split.at + s * (degree + 1), degree, u);
 }
