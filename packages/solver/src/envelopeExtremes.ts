@@ -1,4 +1,5 @@
 import type { Analysis, AnalysisCase } from "./analysisTypes.js";
+import { roundingMargin, type CurveRanges } from "./curveRanges.js";
 import { combineParts, envelopeFactorSets, ENVELOPE_QUANTITIES, evaluateCaseParts, type EnvelopeQuantity, type FactorSet } from "./envelopeQueries.js";
 import { QUANTITY_LAYOUT, type Extreme, type Extremes } from "./fieldQueries.js";
 import { evaluatePolynomial, polynomialRange, signChangesInto, taylorBound } from "./polynomial.js";
@@ -38,7 +39,8 @@ export interface EnvelopeExtremesContext {
   ranges: Record<EnvelopeQuantity, Float64Array>;
 }
 
-export function prepareEnvelopeExtremes(analysis: Analysis): EnvelopeExtremesContext {
+/** `caseRanges` (`curveRanges` of each case's curve) are computed here unless given. */
+export function prepareEnvelopeExtremes(analysis: Analysis, caseRanges?: CurveRanges[]): EnvelopeExtremesContext {
   const grid = analysis.grid;
   const splits = {} as EnvelopeExtremesContext["splits"];
   for (const quantity of ENVELOPE_QUANTITIES) {
@@ -67,6 +69,9 @@ export function prepareEnvelopeExtremes(analysis: Analysis): EnvelopeExtremesCon
         if (split) {
           values[at] = split.negativeMin;
           values[at + 1] = split.positiveMax;
+        } else if (caseRanges) {
+          values[at] = caseRanges[c]![quantity][4 * k]!;
+          values[at + 1] = caseRanges[c]![quantity][4 * k + 1]!;
         } else polynomialRange(cases[c]!.curve.coef, k * COEFFICIENTS_PER_INTERVAL + offset, degree, 0, grid[k + 1]! - grid[k]!, values, at);
       }
     }
@@ -287,7 +292,9 @@ function seedWithSamples(trackers: Record<EnvelopeQuantity, Tracker>, peaks: Flo
   ENVELOPE_QUANTITIES.forEach((quantity, q) => {
     const [max, min] = [peaks[2 * q]!, peaks[2 * q + 1]!];
     if (!(max >= min)) return; // no samples
-    const margin = 1e-9 * Math.max(Math.abs(max), Math.abs(min)) + Number.MIN_VALUE;
+    const scale = Math.max(Math.abs(max), Math.abs(min));
+    if (!(scale >= 1e-100)) return; // see roundingMargin
+    const margin = 1e-9 * scale;
     trackers[quantity].max = { value: max - margin, x: peaks[6 + 2 * q]! };
     trackers[quantity].min = { value: min + margin, x: peaks[7 + 2 * q]! };
   });
@@ -337,8 +344,8 @@ function visitFactorSet(context: EnvelopeExtremesContext, factors: FactorSet, qu
   const ranges = context.ranges[quantity];
   const stride = 2 * analysis.cases.length;
   for (let k = 0; k + 1 < grid.length; k++) {
-    // The sum of the factored case ranges bounds both envelopes on the whole interval; the 1e-12
-    // share of the terms covers rounding in the ranges and in this sum.
+    // The sum of the factored case ranges bounds both envelopes on the whole interval (up to
+    // rounding: `roundingMargin`).
     let high = 0;
     let low = 0;
     let scale = 0;
@@ -350,8 +357,9 @@ function visitFactorSet(context: EnvelopeExtremesContext, factors: FactorSet, qu
       low += Math.min(least, greatest);
       scale += Math.abs(least) + Math.abs(greatest);
     }
-    const wantUpper = high + 1e-12 * scale > tracker.max.value;
-    const wantLower = low - 1e-12 * scale < tracker.min.value;
+    const margin = roundingMargin(scale);
+    const wantUpper = high + margin > tracker.max.value;
+    const wantLower = low - margin < tracker.min.value;
     if (!wantUpper && !wantLower) continue;
     const o = k * COEFFICIENTS_PER_INTERVAL + offset;
     const h = grid[k + 1]! - grid[k]!;

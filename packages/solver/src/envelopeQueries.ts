@@ -96,7 +96,8 @@ export function combineParts(analysis: Analysis, factors: FactorSet, parts: Floa
   return [max, min];
 }
 
-function envelopeOfSets(analysis: Analysis, sets: FactorSet[], parts: Float64Array, out: Float64Array, at: number): void {
+/** Writes [max, min] over the factor sets to out[at], out[at + 1]; the case parts start at parts[from]. */
+function envelopeOfSets(sets: FactorSet[], parts: Float64Array, from: number, out: Float64Array, at: number): void {
   let max = -Infinity;
   let min = Infinity;
   for (let s = 0; s < sets.length; s++) {
@@ -105,8 +106,8 @@ function envelopeOfSets(analysis: Analysis, sets: FactorSet[], parts: Float64Arr
     let lo = 0;
     for (let i = 0; i < factors.length; i++) {
       const { caseIndex, factor } = factors[i]!;
-      const positive = factor * parts[3 * caseIndex + 1]!;
-      const negative = factor * parts[3 * caseIndex + 2]!;
+      const positive = factor * parts[from + 3 * caseIndex + 1]!;
+      const negative = factor * parts[from + 3 * caseIndex + 2]!;
       if (positive >= negative) {
         hi += positive;
         lo += negative;
@@ -136,7 +137,7 @@ export function envelopeAt(analysis: Analysis, id: string, x: number, side: Side
   const values = new Float64Array(6);
   ENVELOPE_QUANTITIES.forEach((quantity, q) => {
     evaluateCaseParts(analysis, k, u, quantity, parts);
-    envelopeOfSets(analysis, sets, parts, values, 2 * q);
+    envelopeOfSets(sets, parts, 0, values, 2 * q);
   });
   return { Vmax: values[0]!, Vmin: values[1]!, Mmax: values[2]!, Mmin: values[3]!, uyMax: values[4]!, uyMin: values[5]! };
 }
@@ -164,7 +165,7 @@ export function envelopeDiagram(analysis: Analysis, id: string, quantity: Envelo
       const u = i === s ? h : (h * i) / s;
       out.x[p] = i === s ? grid[k + 1]! : grid[k]! + u;
       evaluateCaseParts(analysis, k, u, quantity, parts);
-      envelopeOfSets(analysis, sets, parts, pair, 0);
+      envelopeOfSets(sets, parts, 0, pair, 0);
       out.max[p] = pair[0]!;
       out.min[p] = pair[1]!;
     }
@@ -172,22 +173,24 @@ export function envelopeDiagram(analysis: Analysis, id: string, quantity: Envelo
   return out;
 }
 
-/** Envelope of the support reactions for an id, one row per supported node. */
-export function reactionEnvelope(analysis: Analysis, id: string): ReactionEnvelope[] | undefined {
-  const sets = envelopeFactorSets(analysis, id);
-  if (!sets) return undefined;
-  const parts = new Float64Array(3 * analysis.cases.length);
-  const pair = new Float64Array(2);
-  return analysis.supportedNodes.map((node, r) => {
-    const row: ReactionEnvelope = { node, fyMax: 0, fyMin: 0, mzMax: 0, mzMin: 0 };
-    for (const key of ["fy", "mz"] as const) {
-      for (let c = 0; c < analysis.cases.length; c++) {
-        const loadCase = analysis.cases[c]!;
+/**
+ * The case parts (as `evaluateCaseParts`) of every support reaction: 3·cases numbers for fy and
+ * then for mz of each supported node, in order. Shared by the reaction envelopes of every id.
+ */
+export function reactionParts(analysis: Analysis): Float64Array {
+  const cases = analysis.cases;
+  const stride = 3 * cases.length;
+  const parts = new Float64Array(2 * stride * analysis.supportedNodes.length);
+  analysis.supportedNodes.forEach((_, r) => {
+    (["fy", "mz"] as const).forEach((key, j) => {
+      const at = (2 * r + j) * stride;
+      for (let c = 0; c < cases.length; c++) {
+        const loadCase = cases[c]!;
         if (!loadCase.pattern) {
           const value = loadCase.curve[key][r]!;
-          parts[3 * c] = value;
-          parts[3 * c + 1] = value;
-          parts[3 * c + 2] = value;
+          parts[at + 3 * c] = value;
+          parts[at + 3 * c + 1] = value;
+          parts[at + 3 * c + 2] = value;
           continue;
         }
         // Added from 0 in piece order: only the adverse pieces count (see evaluateCaseParts).
@@ -198,14 +201,24 @@ export function reactionEnvelope(analysis: Analysis, id: string): ReactionEnvelo
           positive += Math.max(0, value);
           negative += Math.min(0, value);
         }
-        parts[3 * c] = positive + negative;
-        parts[3 * c + 1] = positive;
-        parts[3 * c + 2] = negative;
+        parts[at + 3 * c] = positive + negative;
+        parts[at + 3 * c + 1] = positive;
+        parts[at + 3 * c + 2] = negative;
       }
-      envelopeOfSets(analysis, sets, parts, pair, 0);
-      if (key === "fy") [row.fyMax, row.fyMin] = [pair[0]!, pair[1]!];
-      else [row.mzMax, row.mzMin] = [pair[0]!, pair[1]!];
-    }
-    return row;
+    });
+  });
+  return parts;
+}
+
+/** Envelope of the support reactions for an id, one row per supported node (`parts`: `reactionParts`). */
+export function reactionEnvelope(analysis: Analysis, id: string, parts: Float64Array = reactionParts(analysis)): ReactionEnvelope[] | undefined {
+  const sets = envelopeFactorSets(analysis, id);
+  if (!sets) return undefined;
+  const stride = 3 * analysis.cases.length;
+  const pair = new Float64Array(4);
+  return analysis.supportedNodes.map((node, r) => {
+    envelopeOfSets(sets, parts, 2 * r * stride, pair, 0);
+    envelopeOfSets(sets, parts, (2 * r + 1) * stride, pair, 2);
+    return { node, fyMax: pair[0]!, fyMin: pair[1]!, mzMax: pair[2]!, mzMin: pair[3]! };
   });
 }

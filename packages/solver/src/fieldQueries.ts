@@ -116,6 +116,13 @@ export class ExtremeTracker {
   minValue = Infinity;
   minX = 0;
 
+  reset(): void {
+    this.maxValue = -Infinity;
+    this.minValue = Infinity;
+    this.maxX = 0;
+    this.minX = 0;
+  }
+
   visit(value: number, x: number): void {
     if (value > this.maxValue) {
       this.maxValue = value;

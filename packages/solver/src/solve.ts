@@ -1,9 +1,10 @@
 import { analyzeModel } from "./analyze.js";
 import type { Analysis, Curve } from "./analysisTypes.js";
 import { prepareEnvelopeExtremes, envelopeExtremesOf, type EnvelopeExtremesContext } from "./envelopeExtremes.js";
-import { envelopeFactorSets, reactionEnvelope, type ReactionEnvelope } from "./envelopeQueries.js";
+import { envelopeFactorSets, reactionEnvelope, reactionParts, type ReactionEnvelope } from "./envelopeQueries.js";
 import { unwrap } from "./errors.js";
-import { curveExtremes, type Extremes } from "./fieldQueries.js";
+import { combinationExtremes, curveRanges, extremesOfRanges, type CurveRanges } from "./curveRanges.js";
+import type { Extremes } from "./fieldQueries.js";
 import { curveStationRows, envelopeStationRows, placeStations, stationValues, type EnvelopeStationRow, type StationPlaces, type StationRow } from "./stationRows.js";
 import { validateModel } from "./validateModel.js";
 
@@ -38,31 +39,31 @@ export interface SolveResult {
   envelopes: Record<string, EnvelopeResult>;
 }
 
-function caseResult(analysis: Analysis, places: StationPlaces, curve: Curve, values: Float64Array): CaseResult {
-  const grid = analysis.grid;
+function caseResult(analysis: Analysis, places: StationPlaces, curve: Curve, values: Float64Array, extremes: Extremes): CaseResult {
   return {
     reactions: analysis.supportedNodes.map((node, r) => ({ node, fy: curve.fy[r]!, mz: curve.mz[r]! })),
     nodes: analysis.nodes.map((node, i) =>
       node.hinge ? { node: i, uy: curve.uy[i]!, rzLeft: curve.rzLeft[i]!, rzRight: curve.rzRight[i]! } : { node: i, uy: curve.uy[i]!, rz: curve.rzRight[i]! },
     ),
     stations: curveStationRows(places, curve, values),
-    extremes: curveExtremes(grid, curve),
+    extremes,
   };
 }
 
-function envelopeResults(analysis: Analysis, places: StationPlaces, ids: string[], combinationValues: Float64Array[]): Record<string, EnvelopeResult> {
+function envelopeResults(analysis: Analysis, places: StationPlaces, ids: string[], combinationValues: Float64Array[], caseRanges: CurveRanges[]): Record<string, EnvelopeResult> {
   if (ids.length === 0) return {};
-  const context: EnvelopeExtremesContext = prepareEnvelopeExtremes(analysis);
+  const context: EnvelopeExtremesContext = prepareEnvelopeExtremes(analysis, caseRanges);
   // envelopeStationRows gives the combinations in order, then "*": the order of ids.
   const peaks = new Float64Array(12 * analysis.combinations.length);
   const stations = envelopeStationRows(analysis, places, context, peaks, combinationValues);
   const out: Record<string, EnvelopeResult> = {};
   const perCombination = new Map<string, EnvelopeResult>();
+  const reactions = reactionParts(analysis);
   ids.forEach((id, i) => {
     const sets = envelopeFactorSets(analysis, id)!;
     // "*" reuses the extremes of the combinations: the worst of the worst.
     const extremes = id === "*" ? worstOf([...perCombination.values()].map((e) => e.extremes)) : envelopeExtremesOf(context, sets, peaks.subarray(12 * i, 12 * i + 12));
-    const result = { reactions: reactionEnvelope(analysis, id)!, stations: stations[i]!, extremes };
+    const result = { reactions: reactionEnvelope(analysis, id, reactions)!, stations: stations[i]!, extremes };
     if (id !== "*") perCombination.set(id, result);
     out[id] = result;
   });
@@ -89,12 +90,17 @@ export function buildSolveResult(analysis: Analysis): SolveResult {
   const size = 4 * places.x.length;
   if (workspace.length < size * (analysis.combinations.length + 1)) workspace = new Float64Array(size * (analysis.combinations.length + 1));
   const slot = (i: number) => workspace.subarray(i * size, (i + 1) * size);
-  for (const c of analysis.cases) results[c.id] = caseResult(analysis, places, c.curve, stationValues(places, c.curve, slot(0)));
+  // the cases' ranges per interval give their extremes and bound the combinations' (and envelopes')
+  const caseRanges = analysis.cases.map((c) => curveRanges(analysis.grid, c.curve));
+  analysis.cases.forEach((c, i) => (results[c.id] = caseResult(analysis, places, c.curve, stationValues(places, c.curve, slot(0)), extremesOfRanges(caseRanges[i]!))));
   // the combinations' station values also give their envelope rows
   const combinationValues = analysis.combinations.map((c, i) => stationValues(places, c.curve, slot(i + 1)));
-  analysis.combinations.forEach((c, i) => (results[c.id] = caseResult(analysis, places, c.curve, combinationValues[i]!)));
+  analysis.combinations.forEach((c, i) => {
+    const extremes = combinationExtremes(analysis, c, caseRanges, { values: combinationValues[i]!, x: places.x });
+    results[c.id] = caseResult(analysis, places, c.curve, combinationValues[i]!, extremes);
+  });
   const ids = analysis.combinations.length > 0 ? [...analysis.combinations.map((c) => c.id), "*"] : [];
-  return { format: "spanwright.result/1", results, envelopes: envelopeResults(analysis, places, ids, combinationValues) };
+  return { format: "spanwright.result/1", results, envelopes: envelopeResults(analysis, places, ids, combinationValues, caseRanges) };
 }
 
 /**
