@@ -1,6 +1,6 @@
 import type { Analysis, AnalysisCase } from "./analysisTypes.js";
 import { roundingMargin, type CurveRanges } from "./curveRanges.js";
-import { combineParts, envelopeFactorSets, ENVELOPE_QUANTITIES, evaluateCaseParts, type EnvelopeQuantity, type FactorSet } from "./envelopeQueries.js";
+import { envelopeFactorSets, envelopeOfSets, ENVELOPE_QUANTITIES, evaluateCaseParts, type EnvelopeQuantity, type FactorSet } from "./envelopeQueries.js";
 import { QUANTITY_LAYOUT, type Extreme, type Extremes } from "./fieldQueries.js";
 import { evaluatePolynomial, polynomialRange, signChangesInto, taylorBound } from "./polynomial.js";
 import { COEFFICIENTS_PER_INTERVAL } from "./segmentField.js";
@@ -52,8 +52,8 @@ export function prepareEnvelopeExtremes(analysis: Analysis, caseRanges?: CurveRa
   for (const quantity of ENVELOPE_QUANTITIES) {
     const values = new Float64Array(2 * (grid.length - 1) * stride);
     for (let k = 0; k + 1 < grid.length; k++) {
-      evaluateCaseParts(analysis, k, 0, quantity, values.subarray(2 * k * stride, (2 * k + 1) * stride));
-      evaluateCaseParts(analysis, k, grid[k + 1]! - grid[k]!, quantity, values.subarray((2 * k + 1) * stride, (2 * k + 2) * stride));
+      evaluateCaseParts(analysis, k, 0, quantity, values, 2 * k * stride);
+      evaluateCaseParts(analysis, k, grid[k + 1]! - grid[k]!, quantity, values, (2 * k + 1) * stride);
     }
     ends[quantity] = values;
   }
@@ -99,7 +99,8 @@ function splitPatternedCase(pieces: AnalysisCase["pieces"], grid: Float64Array, 
   const positiveSum = new CompensatedSums(n);
   const negativeSum = new CompensatedSums(n);
   const perInterval: PatternSplit[] = [];
-  let positive = new Float64Array(4 * n * (grid.length - 1));
+  // room for about one root per piece and interval (the usual count for M); grown when short
+  let positive = new Float64Array((pieces.length + 2) * n * (grid.length - 1));
   let negative = new Float64Array(positive.length);
   let used = 0;
   for (let k = 0; k + 1 < grid.length; k++) {
@@ -225,7 +226,8 @@ class CompensatedSums {
   }
 
   writeTo(out: Float64Array, at: number): void {
-    for (let i = 0; i < this.n; i++) out[at + i] = this.sum[i]! + this.compensation[i]!;
+    const { sum, compensation, n } = this;
+    for (let i = 0; i < n; i++) out[at + i] = sum[i]! + compensation[i]!;
   }
 }
 
@@ -418,11 +420,14 @@ function seedWithBreakpoints(context: EnvelopeExtremesContext, factors: FactorSe
   const grid = analysis.grid;
   const ends = context.ends[quantity];
   const stride = 3 * analysis.cases.length;
+  const sets = [factors];
+  const pair = new Float64Array(2);
   for (let k = 0; k + 1 < grid.length; k++) {
     for (let end = 0; end < 2; end++) {
-      const parts = ends.subarray((2 * k + end) * stride, (2 * k + end + 1) * stride);
+      envelopeOfSets(sets, ends, (2 * k + end) * stride, pair, 0);
       const x = grid[k + end]!;
-      const [max, min] = combineParts(analysis, factors, parts);
+      const max = pair[0]!;
+      const min = pair[1]!;
       if (max > tracker.max.value) tracker.max = { value: max, x };
       if (min < tracker.min.value) tracker.min = { value: min, x };
     }

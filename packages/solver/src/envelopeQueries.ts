@@ -50,7 +50,7 @@ function horner(coef: Float64Array, o: number, degree: number, u: number): numbe
   return v;
 }
 
-export function evaluateCaseParts(analysis: Analysis, k: number, u: number, quantity: EnvelopeQuantity, out: Float64Array): void {
+export function evaluateCaseParts(analysis: Analysis, k: number, u: number, quantity: EnvelopeQuantity, out: Float64Array, at = 0): void {
   const { offset, degree } = QUANTITY_LAYOUT[quantity];
   const o = k * COEFFICIENTS_PER_INTERVAL + offset;
   const cases = analysis.cases;
@@ -58,9 +58,9 @@ export function evaluateCaseParts(analysis: Analysis, k: number, u: number, quan
     const loadCase = cases[c]!;
     if (!loadCase.pattern) {
       const v = horner(loadCase.curve.coef, o, degree, u);
-      out[3 * c] = v;
-      out[3 * c + 1] = v;
-      out[3 * c + 2] = v;
+      out[at + 3 * c] = v;
+      out[at + 3 * c + 1] = v;
+      out[at + 3 * c + 2] = v;
       continue;
     }
     let positive = 0;
@@ -71,33 +71,18 @@ export function evaluateCaseParts(analysis: Analysis, k: number, u: number, quan
       if (v > 0) positive += v;
       else negative += v;
     }
-    out[3 * c] = positive + negative;
-    out[3 * c + 1] = positive;
-    out[3 * c + 2] = negative;
+    out[at + 3 * c] = positive + negative;
+    out[at + 3 * c + 1] = positive;
+    out[at + 3 * c + 2] = negative;
   }
 }
 
-/** [max, min] of a factored sum from case parts (patterned cases: adverse pieces only). */
-export function combineParts(analysis: Analysis, factors: FactorSet, parts: Float64Array): [number, number] {
-  let max = 0;
-  let min = 0;
-  for (let i = 0; i < factors.length; i++) {
-    const { caseIndex, factor } = factors[i]!;
-    const positive = factor * parts[3 * caseIndex + 1]!;
-    const negative = factor * parts[3 * caseIndex + 2]!;
-    if (positive >= negative) {
-      max += positive;
-      min += negative;
-    } else {
-      max += negative;
-      min += positive;
-    }
-  }
-  return [max, min];
-}
-
-/** Writes [max, min] over the factor sets to out[at], out[at + 1]; the case parts start at parts[from]. */
-function envelopeOfSets(sets: FactorSet[], parts: Float64Array, from: number, out: Float64Array, at: number): void {
+/**
+ * Writes [max, min] over the factor sets to out[at], out[at + 1], from case parts (as
+ * `evaluateCaseParts` writes them) starting at parts[from]: patterned cases count their adverse
+ * pieces only.
+ */
+export function envelopeOfSets(sets: FactorSet[], parts: Float64Array, from: number, out: Float64Array, at: number): void {
   let max = -Infinity;
   let min = Infinity;
   for (let s = 0; s < sets.length; s++) {

@@ -119,6 +119,9 @@ export function curveStationRows(places: StationPlaces, curve: Curve, values: Fl
   return rows;
 }
 
+/** Work columns of `envelopeStationRows`, reused from call to call (nothing returned refers to them). */
+let columns = new Float64Array(0);
+
 /**
  * Envelope rows of every combination and of "*" (last), at every station, from each combination's
  * own value (its `stationValues`: every case at full value; computed here unless given). A
@@ -128,7 +131,8 @@ export function curveStationRows(places: StationPlaces, curve: Curve, values: Fl
  * cases are evaluated once per station and shared by every combination; "*" is the worst of the
  * combination rows, which is its definition. With `peaks` (12 numbers per combination), also writes
  * each combination's best sampled Vmax, Vmin, Mmax, Mmin, uyMax, uyMin and then their x (the seeds
- * of `envelopeExtremesOf`).
+ * of `envelopeExtremesOf`). Works column by column (one quantity of one combination over every
+ * station) and builds the row objects last.
  */
 export function envelopeStationRows(
   analysis: Analysis,
@@ -140,97 +144,106 @@ export function envelopeStationRows(
   if (peaks) for (let p = 0; p + 12 <= peaks.length; p += 12) peaks.set(EMPTY_PEAKS, p);
   const combos = analysis.combinations;
   const patternedCases = analysis.cases.flatMap((c, i) => (c.pattern ? [i] : []));
-  // per combination, its patterned factors: the case's place in patternedCases, the factor, and
-  // which part (0 positive, 1 negative) is min(f·positive, f·negative), the one taken off for max
-  const starts = new Int32Array(combos.length + 1);
-  const patternedFactors = combos.map((c) => c.factors.filter((f) => f.factor !== 0 && analysis.cases[f.caseIndex]!.pattern));
-  patternedFactors.forEach((list, i) => (starts[i + 1] = starts[i]! + list.length));
-  const place = new Int32Array(starts[combos.length]!);
-  const factor = new Float64Array(starts[combos.length]!);
-  const forMax = new Int32Array(starts[combos.length]!);
-  patternedFactors.forEach((list, i) =>
-    list.forEach((f, j) => {
-      place[starts[i]! + j] = patternedCases.indexOf(f.caseIndex);
-      factor[starts[i]! + j] = f.factor;
-      forMax[starts[i]! + j] = f.factor > 0 ? 1 : 0;
-    }),
-  );
   const n = places.x.length;
-  const { splits } = context;
-  const quantitySplits = [splits.V, splits.M, splits.uy];
+  // columns: the positive and negative parts of V, M, uy of each patterned case (6 per case),
+  // then Vmax, Vmin, Mmax, Mmin, uyMax, uyMin of each combination and of "*" (6 each)
+  const partsAt = (p: number, q: number, negative: number) => (6 * p + 2 * q + negative) * n;
+  const envelopeAt = (c: number, column: number) => (6 * patternedCases.length + 6 * c + column) * n;
+  const size = (6 * patternedCases.length + 6 * (combos.length + 1)) * n;
+  if (columns.length < size) columns = new Float64Array(size);
+  const work = columns;
+  const quantitySplits = [context.splits.V, context.splits.M, context.splits.uy];
   const degrees = [2, 3, 5];
-  // parts[6p..6p+5]: positive and negative parts of V, M, uy of the p-th patterned case; cursor:
-  // the sub-interval of each (case, quantity) split at the last station
-  const parts = new Float64Array(6 * patternedCases.length);
-  const cursor = new Int32Array(3 * patternedCases.length);
-  let lastK = -1;
-  let lastU = Infinity;
-  const rows: EnvelopeStationRow[][] = Array.from({ length: combos.length + 1 }, () => new Array(n));
-  for (let s = 0; s < n; s++) {
-    const k = places.k[s]!;
-    const u = places.u[s]!;
-    // stations usually ascend: the cursors move on; anything else starts them again
-    if (k !== lastK || u < lastU) cursor.fill(0);
-    lastK = k;
-    lastU = u;
-    for (let p = 0; p < patternedCases.length; p++) {
-      for (let q = 0; q < 3; q++) {
-        const split = quantitySplits[q]![patternedCases[p]!]![k]!;
+  const { k: intervals, u: local } = places;
+  patternedCases.forEach((caseIndex, p) => {
+    for (let q = 0; q < 3; q++) {
+      const splits = quantitySplits[q]![caseIndex]!;
+      const degree = degrees[q]!;
+      const positiveAt = partsAt(p, q, 0);
+      const negativeAt = partsAt(p, q, 1);
+      let lastK = -1;
+      let lastU = Infinity;
+      let sub = 0;
+      for (let s = 0; s < n; s++) {
+        const k = intervals[s]!;
+        const u = local[s]!;
+        // stations usually ascend: the sub-interval moves on; anything else starts it again
+        if (k !== lastK || u < lastU) sub = 0;
+        lastK = k;
+        lastU = u;
+        const split = splits[k]!;
         const cuts = split.cuts;
-        let sub = cursor[3 * p + q]!;
         while (sub + 2 < cuts.length && u >= cuts[sub + 1]!) sub++;
-        cursor[3 * p + q] = sub;
-        const degree = degrees[q]!;
         const o = split.at + sub * (degree + 1);
-        parts[6 * p + 2 * q] = horner(split.positive, o, degree, u);
-        parts[6 * p + 2 * q + 1] = horner(split.negative, o, degree, u);
+        work[positiveAt + s] = horner(split.positive, o, degree, u);
+        work[negativeAt + s] = horner(split.negative, o, degree, u);
       }
     }
-    const x = places.x[s]!;
-    let starVMax = -Infinity;
-    let starVMin = Infinity;
-    let starMMax = -Infinity;
-    let starMMin = Infinity;
-    let starYMax = -Infinity;
-    let starYMin = Infinity;
-    for (let c = 0; c < combos.length; c++) {
-      const own = combinationValues[c]!;
-      let vMax = own[s]!;
-      let mMax = own[n + s]!;
-      let yMax = own[2 * n + s]!;
-      let vMin = vMax;
-      let mMin = mMax;
-      let yMin = yMax;
-      for (let j = starts[c]!; j < starts[c + 1]!; j++) {
-        const at = 6 * place[j]!;
-        const f = factor[j]!;
-        const taken = forMax[j]!;
-        const kept = 1 - taken;
-        vMax -= f * parts[at + taken]!;
-        vMin -= f * parts[at + kept]!;
-        mMax -= f * parts[at + 2 + taken]!;
-        mMin -= f * parts[at + 2 + kept]!;
-        yMax -= f * parts[at + 4 + taken]!;
-        yMin -= f * parts[at + 4 + kept]!;
+  });
+  const star = combos.length;
+  for (let q = 0; q < 3; q++) {
+    work.fill(-Infinity, envelopeAt(star, 2 * q), envelopeAt(star, 2 * q) + n);
+    work.fill(Infinity, envelopeAt(star, 2 * q + 1), envelopeAt(star, 2 * q + 1) + n);
+  }
+  const taken = new Int32Array(patternedCases.length);
+  const kept = new Int32Array(patternedCases.length);
+  const factors = new Float64Array(patternedCases.length);
+  combos.forEach((combination, c) => {
+    const own = combinationValues[c]!;
+    const patterned = combination.factors.filter((f) => f.factor !== 0 && analysis.cases[f.caseIndex]!.pattern);
+    for (let q = 0; q < 3; q++) {
+      // for f > 0, min(f·positive, f·negative) is f·negative, taken off for max; for f < 0, f·positive
+      patterned.forEach(({ caseIndex, factor }, j) => {
+        const p = patternedCases.indexOf(caseIndex);
+        taken[j] = partsAt(p, q, factor > 0 ? 1 : 0);
+        kept[j] = partsAt(p, q, factor > 0 ? 0 : 1);
+        factors[j] = factor;
+      });
+      const count = patterned.length;
+      const maxAt = envelopeAt(c, 2 * q);
+      const minAt = envelopeAt(c, 2 * q + 1);
+      const ownAt = q * n;
+      const starMaxAt = envelopeAt(star, 2 * q);
+      const starMinAt = envelopeAt(star, 2 * q + 1);
+      let best = -Infinity;
+      let bestAt = 0;
+      let least = Infinity;
+      let leastAt = 0;
+      for (let s = 0; s < n; s++) {
+        let max = own[ownAt + s]!;
+        let min = max;
+        for (let j = 0; j < count; j++) {
+          const f = factors[j]!;
+          max -= f * work[taken[j]! + s]!;
+          min -= f * work[kept[j]! + s]!;
+        }
+        work[maxAt + s] = max;
+        work[minAt + s] = min;
+        if (max > best) (best = max), (bestAt = s);
+        if (min < least) (least = min), (leastAt = s);
+        if (max > work[starMaxAt + s]!) work[starMaxAt + s] = max;
+        if (min < work[starMinAt + s]!) work[starMinAt + s] = min;
       }
-      rows[c]![s] = new EnvelopeRow(x, mMax, mMin, vMax, vMin, yMax, yMin);
-      if (peaks) {
-        const p = 12 * c;
-        if (vMax > peaks[p]!) (peaks[p] = vMax), (peaks[p + 6] = x);
-        if (vMin < peaks[p + 1]!) (peaks[p + 1] = vMin), (peaks[p + 7] = x);
-        if (mMax > peaks[p + 2]!) (peaks[p + 2] = mMax), (peaks[p + 8] = x);
-        if (mMin < peaks[p + 3]!) (peaks[p + 3] = mMin), (peaks[p + 9] = x);
-        if (yMax > peaks[p + 4]!) (peaks[p + 4] = yMax), (peaks[p + 10] = x);
-        if (yMin < peaks[p + 5]!) (peaks[p + 5] = yMin), (peaks[p + 11] = x);
+      if (peaks && n > 0) {
+        const at = 12 * c + 2 * q;
+        peaks[at] = best;
+        peaks[at + 1] = least;
+        peaks[at + 6] = places.x[bestAt]!;
+        peaks[at + 7] = places.x[leastAt]!;
       }
-      if (vMax > starVMax) starVMax = vMax;
-      if (vMin < starVMin) starVMin = vMin;
-      if (mMax > starMMax) starMMax = mMax;
-      if (mMin < starMMin) starMMin = mMin;
-      if (yMax > starYMax) starYMax = yMax;
-      if (yMin < starYMin) starYMin = yMin;
     }
-    rows[combos.length]![s] = new EnvelopeRow(x, starMMax, starMMin, starVMax, starVMin, starYMax, starYMin);
+  });
+  const x = places.x;
+  const rows: EnvelopeStationRow[][] = [];
+  for (let c = 0; c <= combos.length; c++) {
+    const list: EnvelopeStationRow[] = new Array(n);
+    const v = envelopeAt(c, 0);
+    const m = envelopeAt(c, 2);
+    const y = envelopeAt(c, 4);
+    for (let s = 0; s < n; s++) {
+      list[s] = new EnvelopeRow(x[s]!, work[m + s]!, work[m + n + s]!, work[v + s]!, work[v + n + s]!, work[y + s]!, work[y + n + s]!);
+    }
+    rows.push(list);
   }
   return rows;
 }
