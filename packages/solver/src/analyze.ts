@@ -34,15 +34,19 @@ export function analyzeModel(model: BeamModel): Result<Analysis> {
   const buffer = new Float64Array(size * bases.length);
   const scratch = createScratch(context);
   const curves = bases.map((basis, b) => solveBasis(context, basis, curveAt(context, buffer, b * size), scratch));
+  // combined curves (cases of several pieces, combinations) share one buffer, as the bases do
+  const combined = new Float64Array(size * (model.loadCases.length + model.combinations.length));
+  let nextCombined = 0;
+  const target = () => curveAt(context, combined, size * nextCombined++);
   const cases: AnalysisCase[] = model.loadCases.map((loadCase, caseIndex) => {
     const pieces = bases.flatMap((basis, b) => (basis.caseIndex === caseIndex ? [{ span: basis.span, curve: curves[b]! }] : []));
-    const curve = combineCurves(context, pieces.map((p) => ({ curve: p.curve, factor: 1 })));
+    const curve = combineCurves(pieces.map((p) => ({ curve: p.curve, factor: 1 })), target);
     return { id: loadCase.id, category: loadCase.category, pattern: loadCase.pattern === true, curve, pieces: loadCase.pattern ? pieces : [] };
   });
   const caseIndexById = new Map(cases.map((c, i) => [c.id, i]));
   const combinations: AnalysisCombination[] = model.combinations.map((combination) => {
     const factors = Object.entries(combination.factors).map(([id, factor]) => ({ caseIndex: caseIndexById.get(id)!, factor }));
-    const curve = combineCurves(context, factors.map((f) => ({ curve: cases[f.caseIndex]!.curve, factor: f.factor })));
+    const curve = combineCurves(factors.map((f) => ({ curve: cases[f.caseIndex]!.curve, factor: f.factor })), target);
     return { id: combination.id, factors, curve };
   });
   return ok({
@@ -91,13 +95,10 @@ function curveAt(context: Context, buffer: Float64Array, start: number): Curve {
   return { coef, uy: take(n), rzLeft: take(n), rzRight: take(n), fy: take(m), mz: take(m) };
 }
 
-function emptyCurve(context: Context): Curve {
-  return curveAt(context, new Float64Array(curveSize(context)), 0);
-}
-
-function combineCurves(context: Context, terms: { curve: Curve; factor: number }[]): Curve {
+/** Σ factor · curve into a zeroed curve from `target` (a single unfactored term is itself). */
+function combineCurves(terms: { curve: Curve; factor: number }[], target: () => Curve): Curve {
   if (terms.length === 1 && terms[0]!.factor === 1) return terms[0]!.curve;
-  const out = emptyCurve(context);
+  const out = target();
   for (const { curve, factor } of terms) {
     for (const key of ["coef", "uy", "rzLeft", "rzRight", "fy", "mz"] as const) {
       const target = out[key];

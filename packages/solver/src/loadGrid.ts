@@ -121,16 +121,26 @@ export function spanOf(spans: readonly Span[], x: number): number {
   return lo;
 }
 
-function emptyBasis(grid: LoadGrid, caseIndex: number, span: number): BasisLoads {
+function emptyBasis(grid: LoadGrid, caseIndex: number, span: number, take: (length: number) => Float64Array): BasisLoads {
   const K = grid.x.length - 1;
-  return {
-    caseIndex,
-    span,
-    q0: new Float64Array(K),
-    q1: new Float64Array(K),
-    fy: new Float64Array(K + 1),
-    mz: new Float64Array(K + 1),
-    settlements: [],
+  return { caseIndex, span, q0: take(K), q1: take(K), fy: take(K + 1), mz: take(K + 1), settlements: [] };
+}
+
+/**
+ * Zeroed views of shared buffers, `chunk` numbers each: a small typed array of its own costs an
+ * allocation outside the heap (microseconds each, hundreds per solve), a view of a shared one not.
+ */
+export function viewsOf(chunk: number): (length: number) => Float64Array {
+  let buffer = new Float64Array(0);
+  let used = 0;
+  return (length) => {
+    if (used + length > buffer.length) {
+      buffer = new Float64Array(Math.max(chunk, length));
+      used = 0;
+    }
+    const view = buffer.subarray(used, used + length);
+    used += length;
+    return view;
   };
 }
 
@@ -143,12 +153,14 @@ export function buildBases(model: BeamModel, grid: LoadGrid): BasisLoads[] {
   const nodeX = model.nodes.map((n) => n.x);
   const tolerance = snapTolerance(model);
   const indexOf = (x: number) => nearestIndex(grid.x, snap(nodeX, x, tolerance));
+  // room for a few dozen bases per buffer (a patterned case has one per loaded span)
+  const take = viewsOf(32 * (4 * grid.x.length));
   model.loadCases.forEach((loadCase, caseIndex) => {
     const pieces = new Map<number, BasisLoads>();
     const basisFor = (span: number) => {
       const key = loadCase.pattern ? span : -1;
       let basis = pieces.get(key);
-      if (!basis) pieces.set(key, (basis = emptyBasis(grid, caseIndex, key)));
+      if (!basis) pieces.set(key, (basis = emptyBasis(grid, caseIndex, key, take)));
       return basis;
     };
     for (const load of loadCase.loads) {

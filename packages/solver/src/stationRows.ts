@@ -205,20 +205,24 @@ export function envelopeStationRows(
       const ownAt = q * n;
       const starMaxAt = envelopeAt(star, 2 * q);
       const starMinAt = envelopeAt(star, 2 * q + 1);
+      work.set(own.subarray(ownAt, ownAt + n), maxAt);
+      work.set(own.subarray(ownAt, ownAt + n), minAt);
+      for (let j = 0; j < count; j++) {
+        const f = factors[j]!;
+        const t = taken[j]!;
+        const k = kept[j]!;
+        for (let s = 0; s < n; s++) {
+          work[maxAt + s]! -= f * work[t + s]!;
+          work[minAt + s]! -= f * work[k + s]!;
+        }
+      }
       let best = -Infinity;
       let bestAt = 0;
       let least = Infinity;
       let leastAt = 0;
       for (let s = 0; s < n; s++) {
-        let max = own[ownAt + s]!;
-        let min = max;
-        for (let j = 0; j < count; j++) {
-          const f = factors[j]!;
-          max -= f * work[taken[j]! + s]!;
-          min -= f * work[kept[j]! + s]!;
-        }
-        work[maxAt + s] = max;
-        work[minAt + s] = min;
+        const max = work[maxAt + s]!;
+        const min = work[minAt + s]!;
         if (max > best) (best = max), (bestAt = s);
         if (min < least) (least = min), (leastAt = s);
         if (max > work[starMaxAt + s]!) work[starMaxAt + s] = max;
