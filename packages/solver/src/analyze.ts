@@ -5,7 +5,7 @@ import { factorBanded, solveFactored } from "./bandedMatrix.js";
 import { findRigidMotion } from "./checkStability.js";
 import { describeMechanism } from "./describeMechanism.js";
 import { fail, ok, unwrap, type Result } from "./errors.js";
-import { buildBases, buildLoadGrid, type BasisLoads } from "./loadGrid.js";
+import { buildBases, buildLoadGrid, viewsOf, type BasisLoads } from "./loadGrid.js";
 import { elementDofs, numberDofs } from "./numberDofs.js";
 import { COEFFICIENTS_PER_INTERVAL, equivalentNodalLoads, marchSegment, solveStartForces } from "./segmentField.js";
 import { balanceChains, recoverReactions, REFINEMENT_STEPS, residual, type SolveContext as Context } from "./recoverForces.js";
@@ -35,9 +35,8 @@ export function analyzeModel(model: BeamModel): Result<Analysis> {
   const scratch = createScratch(context);
   const curves = bases.map((basis, b) => solveBasis(context, basis, curveAt(context, buffer, b * size), scratch));
   // combined curves (cases of several pieces, combinations) share one buffer, as the bases do
-  const combined = new Float64Array(size * (model.loadCases.length + model.combinations.length));
-  let nextCombined = 0;
-  const target = () => curveAt(context, combined, size * nextCombined++);
+  const take = viewsOf(size * (model.loadCases.length + model.combinations.length));
+  const target = () => curveAt(context, take(size), 0);
   const cases: AnalysisCase[] = model.loadCases.map((loadCase, caseIndex) => {
     const pieces = bases.flatMap((basis, b) => (basis.caseIndex === caseIndex ? [{ span: basis.span, curve: curves[b]! }] : []));
     const curve = combineCurves(pieces.map((p) => ({ curve: p.curve, factor: 1 })), target);

@@ -15,7 +15,8 @@ const QUANTITIES: readonly EnvelopeQuantity[] = ["V", "M", "uy"];
 
 export function curveRanges(grid: ArrayLike<number>, curve: Curve): CurveRanges {
   const K = grid.length - 1;
-  const out = { V: new Float64Array(4 * K), M: new Float64Array(4 * K), uy: new Float64Array(4 * K) };
+  const all = new Float64Array(12 * K); // one allocation for the three
+  const out = { V: all.subarray(0, 4 * K), M: all.subarray(4 * K, 8 * K), uy: all.subarray(8 * K) };
   const tracker = new ExtremeTracker();
   const scratch = new Float64Array(6);
   for (const quantity of QUANTITIES) {

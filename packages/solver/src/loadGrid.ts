@@ -127,8 +127,9 @@ function emptyBasis(grid: LoadGrid, caseIndex: number, span: number, take: (leng
 }
 
 /**
- * Zeroed views of shared buffers, `chunk` numbers each: a small typed array of its own costs an
- * allocation outside the heap (microseconds each, hundreds per solve), a view of a shared one not.
+ * Zeroed views of shared buffers, allocated when first needed, `chunk` numbers each: a small typed
+ * array of its own costs an allocation outside the heap (microseconds each, hundreds per solve),
+ * a view of a shared one not.
  */
 export function viewsOf(chunk: number): (length: number) => Float64Array {
   let buffer = new Float64Array(0);
@@ -153,8 +154,10 @@ export function buildBases(model: BeamModel, grid: LoadGrid): BasisLoads[] {
   const nodeX = model.nodes.map((n) => n.x);
   const tolerance = snapTolerance(model);
   const indexOf = (x: number) => nearestIndex(grid.x, snap(nodeX, x, tolerance));
-  // room for a few dozen bases per buffer (a patterned case has one per loaded span)
-  const take = viewsOf(32 * (4 * grid.x.length));
+  // a buffer holds as many bases as there can be (a patterned case has one per loaded span), at
+  // most 32: large beams with one case must not pay for more
+  const most = model.loadCases.reduce((sum, c) => sum + (c.pattern ? grid.spans.length : 1), 0);
+  const take = viewsOf(Math.min(most, 32) * (4 * grid.x.length));
   model.loadCases.forEach((loadCase, caseIndex) => {
     const pieces = new Map<number, BasisLoads>();
     const basisFor = (span: number) => {
