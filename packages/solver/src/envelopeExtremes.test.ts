@@ -1,9 +1,12 @@
+import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import type { Analysis, Curve } from "./analysisTypes.js";
 import { analyze } from "./analyze.js";
 import { beamModelSchema } from "./beamModelSchema.js";
-import { prepareEnvelopeExtremes } from "./envelopeExtremes.js";
-import { ENVELOPE_QUANTITIES, evaluateCaseParts } from "./envelopeQueries.js";
+import { envelopeExtremesOf, prepareEnvelopeExtremes } from "./envelopeExtremes.js";
+import { ENVELOPE_QUANTITIES, envelopeFactorSets, evaluateCaseParts } from "./envelopeQueries.js";
+import { envelopeStationRows, placeStations } from "./stationRows.js";
+import { beamShapeArb, loadsArb, stationsArb, toModel } from "./testing/arbitraries.js";
 import { COEFFICIENTS_PER_INTERVAL, V_OFFSET } from "./segmentField.js";
 
 /** A curve on one interval whose shear is c₀ + c₁u (other quantities zero). */
@@ -104,4 +107,53 @@ describe("interval ranges of the cases", () => {
       });
     }
   });
+});
+
+describe("envelope extremes skipping intervals", () => {
+  // The interval ranges and the station seeds only skip work: the extremes, value and x, must be
+  // those of the search over every sub-interval of every interval (ranges made unbounded).
+  it("equal the search over every interval", () => {
+    const arb = beamShapeArb().chain((shape) =>
+      fc.record({
+        shape: fc.constant(shape),
+        a: loadsArb(shape.nodes),
+        b: loadsArb(shape.nodes),
+        c: loadsArb(shape.nodes),
+        stations: stationsArb(shape.nodes, 40),
+        factors: fc.array(fc.double({ min: -2, max: 2, noNaN: true }), { minLength: 6, maxLength: 6 }),
+      }),
+    );
+    fc.assert(
+      fc.property(arb, ({ shape, a, b, c, stations, factors }) => {
+        const model = toModel(
+          shape,
+          [
+            { id: "A", category: "dead", loads: a },
+            { id: "B", category: "live", pattern: true, loads: b },
+            { id: "C", category: "snow", pattern: true, loads: c },
+          ],
+          {
+            combinations: [
+              { id: "X", factors: { A: factors[0]!, B: factors[1]!, C: factors[2]! } },
+              { id: "Y", factors: { A: factors[3]!, B: factors[4]!, C: factors[5]! } },
+            ],
+            stations,
+          },
+        );
+        const analysis = analyze(beamModelSchema.parse(model));
+        const context = prepareEnvelopeExtremes(analysis);
+        const unbounded = { ...context, ranges: Object.fromEntries(ENVELOPE_QUANTITIES.map((q) => [q, context.ranges[q].map((_, i) => (i % 2 === 0 ? -Infinity : Infinity))])) } as typeof context;
+        const places = placeStations(analysis.grid, analysis.stations);
+        const peaks = new Float64Array(12 * analysis.combinations.length);
+        envelopeStationRows(analysis, places, context, peaks);
+        analysis.combinations.forEach((combination, i) => {
+          const sets = envelopeFactorSets(analysis, combination.id)!;
+          const expected = envelopeExtremesOf(unbounded, sets);
+          expect(envelopeExtremesOf(context, sets)).toEqual(expected);
+          expect(envelopeExtremesOf(context, sets, peaks.subarray(12 * i, 12 * i + 12))).toEqual(expected);
+        });
+      }),
+      { numRuns: 150 },
+    );
+  }, 60_000);
 });
