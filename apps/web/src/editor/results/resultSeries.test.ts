@@ -42,6 +42,15 @@ describe("results read from the engine for the editor", () => {
     expect(rows.map((r) => r.fy[0])).toEqual([expect.closeTo(15000, 6), expect.closeTo(15000, 6)]);
   });
 
+  it("searches an envelope's extremes once per analysis, for every quantity the views ask for", () => {
+    const first = seriesFor(analysis, "*", true, "V")!;
+    const again = seriesFor(analysis, "*", true, "V")!;
+    expect(again.max).toBe(first.max); // the same object: not searched again
+    const other = analyze(beamModelSchema.parse(toExchange(doc)));
+    expect(seriesFor(other, "*", true, "V")!.max).not.toBe(first.max);
+    expect(seriesFor(other, "*", true, "V")!.max).toEqual(first.max);
+  });
+
   it("rotation has no envelope in the contract", () => {
     expect(seriesFor(analysis, "*", true, "rz")).toBeNull();
   });

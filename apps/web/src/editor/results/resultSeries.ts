@@ -8,6 +8,7 @@ import {
   valuesAt,
   type Analysis,
   type Extreme,
+  type Extremes,
   type Quantity,
 } from "@spanwright/solver";
 import type { BeamDocument } from "../model/BeamDocument";
@@ -49,11 +50,25 @@ export function defaultTarget(doc: BeamDocument): ResultTarget | null {
 // Samples per grid interval: enough for smooth cubic and quintic curves at editor sizes.
 const SAMPLES = 24;
 
+/**
+ * Envelope extremes per analysis and id: the diagrams and the readout ask for them once per
+ * quantity, and each search covers all three quantities (about half a millisecond per call for
+ * a 20-span beam with patterned cases).
+ */
+const envelopeExtremesCache = new WeakMap<Analysis, Map<string, Extremes | undefined>>();
+
+function cachedEnvelopeExtremes(analysis: Analysis, name: string): Extremes | undefined {
+  let byName = envelopeExtremesCache.get(analysis);
+  if (!byName) envelopeExtremesCache.set(analysis, (byName = new Map()));
+  if (!byName.has(name)) byName.set(name, envelopeExtremes(analysis, name));
+  return byName.get(name);
+}
+
 export function seriesFor(analysis: Analysis, name: string, isEnvelope: boolean, quantity: Quantity): Series | null {
   if (isEnvelope) {
     if (quantity === "rz") return null; // the contract envelopes V, M and uy only
     const d = envelopeDiagram(analysis, name, quantity, SAMPLES);
-    const e = envelopeExtremes(analysis, name);
+    const e = cachedEnvelopeExtremes(analysis, name);
     if (!d || !e) return null;
     return { quantity, x: d.x, lines: [d.max, d.min], ...pickExtremes(e, quantity) };
   }
