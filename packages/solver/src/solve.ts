@@ -5,7 +5,7 @@ import { envelopeFactorSets, reactionEnvelope, reactionParts, type ReactionEnvel
 import { unwrap } from "./errors.js";
 import { combinationExtremes, curveRanges, extremesOfRanges, type CurveRanges } from "./curveRanges.js";
 import type { Extremes } from "./fieldQueries.js";
-import { curveStationRows, envelopeStationRows, placeStations, stationValues, type EnvelopeStationRow, type StationPlaces, type StationRow } from "./stationRows.js";
+import { curveStationRows, envelopeStationRows, placeStations, stationValues, workArray, type EnvelopeStationRow, type StationPlaces, type StationRow } from "./stationRows.js";
 import { validateModel } from "./validateModel.js";
 
 export type { EnvelopeStationRow, StationRow } from "./stationRows.js";
@@ -76,20 +76,16 @@ function worstOf(list: Extremes[]): Extremes {
   return { Mmax: pick("Mmax", true), Mmin: pick("Mmin", false), Vmax: pick("Vmax", true), Vmin: pick("Vmin", false), uyMax: pick("uyMax", true), uyMin: pick("uyMin", false) };
 }
 
-/**
- * Work space for the station values, reused from solve to solve (nothing returned refers to it): a
- * large typed array per curve and solve was slow to allocate, and the external memory it counted
- * brought on full garbage collections.
- */
-let workspace = new Float64Array(0);
+/** Work space for the station values (`workArray`: nothing returned refers to it). */
+const workspace = { array: new Float64Array(0) };
 
 /** Builds the exchange-format result from an analysis. */
 export function buildSolveResult(analysis: Analysis): SolveResult {
   const results: Record<string, CaseResult> = {};
   const places = placeStations(analysis.grid, analysis.stations);
   const size = 4 * places.x.length;
-  if (workspace.length < size * (analysis.combinations.length + 1)) workspace = new Float64Array(size * (analysis.combinations.length + 1));
-  const slot = (i: number) => workspace.subarray(i * size, (i + 1) * size);
+  const work = workArray(size * (analysis.combinations.length + 1), workspace);
+  const slot = (i: number) => work.subarray(i * size, (i + 1) * size);
   // the cases' ranges per interval give their extremes and bound the combinations' (and envelopes')
   const caseRanges = analysis.cases.map((c) => curveRanges(analysis.grid, c.curve));
   analysis.cases.forEach((c, i) => (results[c.id] = caseResult(analysis, places, c.curve, stationValues(places, c.curve, slot(0)), extremesOfRanges(caseRanges[i]!))));

@@ -119,8 +119,21 @@ export function curveStationRows(places: StationPlaces, curve: Curve, values: Fl
   return rows;
 }
 
-/** Work columns of `envelopeStationRows`, reused from call to call (nothing returned refers to them). */
-let columns = new Float64Array(0);
+/**
+ * A work array of at least `size` numbers (contents undefined). Up to 1 M numbers (8 MB) it is kept
+ * and handed out again on the next call: a large typed array per call was slow to allocate, and the
+ * memory it counted outside the heap brought on full garbage collections. Larger ones are not
+ * kept, so a long-lived solver thread does not hold on to one huge model's memory. Callers must
+ * not keep it past their return, nor call `workArray` again while using it (one at a time).
+ */
+export function workArray(size: number, kept: { array: Float64Array<ArrayBuffer> }): Float64Array<ArrayBuffer> {
+  if (kept.array.length >= size) return kept.array;
+  const array = new Float64Array(size);
+  if (size <= 1 << 20) kept.array = array;
+  return array;
+}
+
+const columns = { array: new Float64Array(0) };
 
 /**
  * Envelope rows of every combination and of "*" (last), at every station, from each combination's
@@ -150,8 +163,7 @@ export function envelopeStationRows(
   const partsAt = (p: number, q: number, negative: number) => (6 * p + 2 * q + negative) * n;
   const envelopeAt = (c: number, column: number) => (6 * patternedCases.length + 6 * c + column) * n;
   const size = (6 * patternedCases.length + 6 * (combos.length + 1)) * n;
-  if (columns.length < size) columns = new Float64Array(size);
-  const work = columns;
+  const work = workArray(size, columns);
   const quantitySplits = [context.splits.V, context.splits.M, context.splits.uy];
   const degrees = [2, 3, 5];
   const { k: intervals, u: local } = places;
