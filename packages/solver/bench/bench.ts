@@ -11,6 +11,10 @@ import { factorBanded, getBanded, solveFactored } from "../src/bandedMatrix.js";
 import { numberDofs } from "../src/numberDofs.js";
 import { generateBeam, interactiveModel, uniform } from "./models.js";
 import { beamModelSchema } from "../src/beamModelSchema.js";
+import { analyzeModel } from "../src/analyze.js";
+import { unwrap } from "../src/errors.js";
+import { curveStationRows, placeStations, stationValues } from "../src/stationRows.js";
+import { validateModel } from "../src/validateModel.js";
 
 function median(samples: number[]): number {
   const sorted = [...samples].sort((a, b) => a - b);
@@ -66,12 +70,53 @@ function interactive(): { solveTime: number; editorTime: number; analyzeTime: nu
     return envelopeDiagram(analysis, "*", "M", samples);
   }, 300);
   const solveTime = time(() => solve(input), 100);
+  const floorTime = time(() => resultFloor(input), 100);
   console.log(`interactive model (20 spans, 6 cases, 10 combinations, 2 patterned, 100 stations/span):`);
   console.log(`  ISSUE'S INTERACTIVE CASE = full solve() on this model (validate, analyse, 2000 stations x 16 results,`);
   console.log(`    11 envelopes with stations, reactions and exact extremes): ${ms(solveTime)} (median of 100)`);
+  console.log(`  of which the format's floor (validate, analyse, station values, the 54,000 row objects; no envelope`);
+  console.log(`    or extreme work at all): ${ms(floorTime)} (median of 100)`);
   console.log(`  for comparison, analyze() alone: ${ms(analyzeTime)} (median of 300)`);
   console.log(`  for comparison, editor path (analyze() + 3 diagrams + "*" M envelope at 100 samples/span): ${ms(editorTime)} (median of 300)`);
   return { solveTime, editorTime, analyzeTime };
+}
+
+/** Row objects of the envelopes' shape (the engine's own class is internal to stationRows.ts). */
+class EnvelopeRowShape {
+  constructor(
+    public x: number,
+    public Mmax: number,
+    public Mmin: number,
+    public Vmax: number,
+    public Vmin: number,
+    public uyMax: number,
+    public uyMin: number,
+  ) {}
+}
+
+let floorBuffer = new Float64Array(0);
+
+/**
+ * What any engine keeping the exchange format must do for this model, without envelopes or
+ * extremes: validate, analyse, evaluate every curve at the stations and build every row object
+ * (16 curves' station rows, and 11 envelopes' rows, here filled from the combinations' values).
+ */
+function resultFloor(input: unknown): unknown {
+  const analysis = unwrap(analyzeModel(unwrap(validateModel(input))));
+  const places = placeStations(analysis.grid, analysis.stations);
+  const n = places.x.length;
+  const curves = [...analysis.cases, ...analysis.combinations];
+  if (floorBuffer.length < 4 * n * curves.length) floorBuffer = new Float64Array(4 * n * curves.length);
+  const values = curves.map((c, i) => stationValues(places, c.curve, floorBuffer.subarray(4 * n * i, 4 * n * (i + 1))));
+  const rows = curves.map((c, i) => curveStationRows(places, c.curve, values[i]));
+  const envelopes: EnvelopeRowShape[][] = [];
+  for (let c = 0; c <= analysis.combinations.length; c++) {
+    const v = values[analysis.cases.length + Math.min(c, analysis.combinations.length - 1)]!;
+    const list: EnvelopeRowShape[] = new Array(n);
+    for (let s = 0; s < n; s++) list[s] = new EnvelopeRowShape(places.x[s]!, v[n + s]!, v[n + s]!, v[s]!, v[s]!, v[2 * n + s]!, v[2 * n + s]!);
+    envelopes.push(list);
+  }
+  return [rows, envelopes];
 }
 
 function bandedVersusDense(): number {
