@@ -217,24 +217,35 @@ export function envelopeStationRows(
       const ownAt = q * n;
       const starMaxAt = envelopeAt(star, 2 * q);
       const starMinAt = envelopeAt(star, 2 * q + 1);
-      work.set(own.subarray(ownAt, ownAt + n), maxAt);
-      work.set(own.subarray(ownAt, ownAt + n), minAt);
-      for (let j = 0; j < count; j++) {
-        const f = factors[j]!;
-        const t = taken[j]!;
-        const k = kept[j]!;
-        for (let s = 0; s < n; s++) {
-          work[maxAt + s]! -= f * work[t + s]!;
-          work[minAt + s]! -= f * work[k + s]!;
-        }
-      }
+      // one pass per column pair: own value less the adverse parts (at most two patterned cases
+      // take the unrolled path, more the general loop), then the peaks and the "*" columns
       let best = -Infinity;
       let bestAt = 0;
       let least = Infinity;
       let leastAt = 0;
+      const f0 = count > 0 ? factors[0]! : 0;
+      const t0 = count > 0 ? taken[0]! : 0;
+      const k0 = count > 0 ? kept[0]! : 0;
+      const f1 = count > 1 ? factors[1]! : 0;
+      const t1 = count > 1 ? taken[1]! : 0;
+      const k1 = count > 1 ? kept[1]! : 0;
       for (let s = 0; s < n; s++) {
-        const max = work[maxAt + s]!;
-        const min = work[minAt + s]!;
+        let max = own[ownAt + s]!;
+        let min = max;
+        if (count > 0) {
+          max -= f0 * work[t0 + s]!;
+          min -= f0 * work[k0 + s]!;
+          if (count > 1) {
+            max -= f1 * work[t1 + s]!;
+            min -= f1 * work[k1 + s]!;
+            for (let j = 2; j < count; j++) {
+              max -= factors[j]! * work[taken[j]! + s]!;
+              min -= factors[j]! * work[kept[j]! + s]!;
+            }
+          }
+        }
+        work[maxAt + s] = max;
+        work[minAt + s] = min;
         if (max > best) (best = max), (bestAt = s);
         if (min < least) (least = min), (leastAt = s);
         if (max > work[starMaxAt + s]!) work[starMaxAt + s] = max;
