@@ -13,7 +13,7 @@ import { generateBeam, interactiveModel, uniform } from "./models.js";
 import { beamModelSchema } from "../src/beamModelSchema.js";
 import { analyzeModel } from "../src/analyze.js";
 import { unwrap } from "../src/errors.js";
-import { curveStationRows, placeStations, stationValues } from "../src/stationRows.js";
+import { curveStationRows, EnvelopeRow, placeStations, stationValues } from "../src/stationRows.js";
 import { validateModel } from "../src/validateModel.js";
 
 function median(samples: number[]): number {
@@ -81,19 +81,6 @@ function interactive(): { solveTime: number; editorTime: number; analyzeTime: nu
   return { solveTime, editorTime, analyzeTime };
 }
 
-/** Row objects of the envelopes' shape (the engine's own class is internal to stationRows.ts). */
-class EnvelopeRowShape {
-  constructor(
-    public x: number,
-    public Mmax: number,
-    public Mmin: number,
-    public Vmax: number,
-    public Vmin: number,
-    public uyMax: number,
-    public uyMin: number,
-  ) {}
-}
-
 let floorBuffer = new Float64Array(0);
 
 /**
@@ -109,11 +96,11 @@ function resultFloor(input: unknown): unknown {
   if (floorBuffer.length < 4 * n * curves.length) floorBuffer = new Float64Array(4 * n * curves.length);
   const values = curves.map((c, i) => stationValues(places, c.curve, floorBuffer.subarray(4 * n * i, 4 * n * (i + 1))));
   const rows = curves.map((c, i) => curveStationRows(places, c.curve, values[i]));
-  const envelopes: EnvelopeRowShape[][] = [];
+  const envelopes: EnvelopeRow[][] = [];
   for (let c = 0; c <= analysis.combinations.length; c++) {
     const v = values[analysis.cases.length + Math.min(c, analysis.combinations.length - 1)]!;
-    const list: EnvelopeRowShape[] = new Array(n);
-    for (let s = 0; s < n; s++) list[s] = new EnvelopeRowShape(places.x[s]!, v[n + s]!, v[n + s]!, v[s]!, v[s]!, v[2 * n + s]!, v[2 * n + s]!);
+    const list: EnvelopeRow[] = new Array(n);
+    for (let s = 0; s < n; s++) list[s] = new EnvelopeRow(places.x[s]!, v[n + s]!, v[n + s]!, v[s]!, v[s]!, v[2 * n + s]!, v[2 * n + s]!);
     envelopes.push(list);
   }
   return [rows, envelopes];

@@ -5,11 +5,12 @@ import { factorBanded, solveFactored } from "./bandedMatrix.js";
 import { findRigidMotion } from "./checkStability.js";
 import { describeMechanism } from "./describeMechanism.js";
 import { fail, ok, unwrap, type Result } from "./errors.js";
-import { buildBases, buildLoadGrid, viewsOf, type BasisLoads } from "./loadGrid.js";
+import { buildBases, buildLoadGrid, type BasisLoads } from "./loadGrid.js";
 import { elementDofs, numberDofs } from "./numberDofs.js";
 import { COEFFICIENTS_PER_INTERVAL, equivalentNodalLoads, marchSegment, solveStartForces } from "./segmentField.js";
 import { balanceChains, recoverReactions, REFINEMENT_STEPS, residual, type SolveContext as Context } from "./recoverForces.js";
 import { validateModel } from "./validateModel.js";
+import { viewsOf } from "./workBuffers.js";
 
 /**
  * Solves a validated model: factors the banded stiffness once, then solves every load case (and

@@ -46,6 +46,7 @@ describe("extremes from interval ranges", () => {
 
   it("keep the first x of a repeated extreme", () => {
     // M = u(1 − u) on both intervals of [0, 1, 2]: equal peaks of 1/4 at x = 0.5 and 1.5, exactly
+    // (by hand: the derivative 1 − 2u vanishes at u = 1/2)
     const coef = new Float64Array(2 * COEFFICIENTS_PER_INTERVAL);
     for (const k of [0, 1]) coef.set([0, 1, -1], k * COEFFICIENTS_PER_INTERVAL + M_OFFSET);
     const none = new Float64Array(3);

@@ -67,25 +67,14 @@ export function combinationExtremes(
   const trackers = QUANTITIES.map(() => new ExtremeTracker());
   const scratch = new Float64Array(6);
   const interval = new ExtremeTracker();
+  const bound = new Float64Array(2);
   QUANTITIES.forEach((quantity, q) => {
     const tracker = trackers[q]!;
     if (samples) seedWithSamples(tracker, samples.values, q, samples.x);
     const { offset, degree } = QUANTITY_LAYOUT[quantity];
     for (let k = 0; k < K; k++) {
-      let high = 0;
-      let low = 0;
-      let scale = 0;
-      for (let i = 0; i < factors.length; i++) {
-        const { caseIndex, factor } = factors[i]!;
-        const range = caseRanges[caseIndex]![quantity];
-        const least = factor * range[4 * k]!;
-        const greatest = factor * range[4 * k + 1]!;
-        high += Math.max(least, greatest);
-        low += Math.min(least, greatest);
-        scale += Math.abs(least) + Math.abs(greatest);
-      }
-      const margin = roundingMargin(scale);
-      if (high + margin <= tracker.maxValue && low - margin >= tracker.minValue) continue;
+      intervalBound(factors, caseRanges, quantity, k, bound);
+      if (bound[0]! <= tracker.maxValue && bound[1]! >= tracker.minValue) continue;
       interval.reset();
       visitPolynomialExtremes(combination.curve.coef, k * COEFFICIENTS_PER_INTERVAL + offset, degree, grid[k + 1]! - grid[k]!, grid[k]!, grid[k + 1]!, scratch, interval);
       if (interval.maxValue > tracker.maxValue) [tracker.maxValue, tracker.maxX] = [interval.maxValue, interval.maxX];
@@ -97,22 +86,45 @@ export function combinationExtremes(
 }
 
 /**
- * What a bound from ranges summed with these terms (Σ |factor · range|) may be off by: 1e-12 of
- * them covers rounding in the ranges, the sum and the combined curve. Below 1e-100 (no physical
- * value in N, m or rad) squares of the polynomials' terms underflow and their rounding is no longer
- * relative, so nothing is skipped there and every interval is searched, as without ranges.
+ * Bounds of Σ factor · case on grid interval k from the cases' ranges there: out[0] lies at or
+ * above its greatest value, out[1] at or below its least (for a patterned case, whose ranges hold
+ * its negative and positive parts, of its worst arrangement). Each bound is widened by 1e-12 of
+ * Σ |factor · range|, for rounding in the ranges, this sum and the combined curve. Below 1e-100 (no
+ * physical value in N, m or rad) squares of the polynomials' terms underflow and their rounding is no
+ * longer relative: the bounds are then infinite, so every interval is searched, as without ranges.
  */
-export function roundingMargin(scale: number): number {
-  return scale >= 1e-100 ? 1e-12 * scale : Infinity;
+export function intervalBound(factors: readonly { caseIndex: number; factor: number }[], ranges: CurveRanges[], quantity: EnvelopeQuantity, k: number, out: Float64Array): void {
+  let high = 0;
+  let low = 0;
+  let scale = 0;
+  for (let i = 0; i < factors.length; i++) {
+    const { caseIndex, factor } = factors[i]!;
+    const range = ranges[caseIndex]![quantity];
+    const least = factor * range[4 * k]!;
+    const greatest = factor * range[4 * k + 1]!;
+    high += Math.max(least, greatest);
+    low += Math.min(least, greatest);
+    scale += Math.abs(least) + Math.abs(greatest);
+  }
+  const margin = scale >= 1e-100 ? 1e-12 * scale : Infinity;
+  out[0] = high + margin;
+  out[1] = low - margin;
 }
 
 /**
- * Starts a tracker a hair (1e-9 of the scale) inside the best of column q of the samples. Not below
- * 1e-100, where the search can miss what a sample finds (see `roundingMargin`).
+ * How far inside the best sampled values (greatest `max`, least `min`) a search may start: a hair,
+ * 1e-9 of their scale, so the exact search always replaces the start and the extreme and its x come
+ * from the polynomials, never from a sample. NaN (do not start there) without samples or below
+ * 1e-100, where the search can miss what a sample finds (see `intervalBound`).
  */
+export function seedMargin(max: number, min: number): number {
+  const scale = Math.max(Math.abs(max), Math.abs(min));
+  return max >= min && scale >= 1e-100 ? 1e-9 * scale : NaN;
+}
+
+/** Starts a tracker just inside the best of column q of the samples (`seedMargin`). */
 function seedWithSamples(tracker: ExtremeTracker, values: Float64Array, q: number, x: ArrayLike<number>): void {
   const n = x.length;
-  if (n === 0) return;
   let max = -Infinity;
   let min = Infinity;
   let maxAt = 0;
@@ -122,9 +134,8 @@ function seedWithSamples(tracker: ExtremeTracker, values: Float64Array, q: numbe
     if (v > max) [max, maxAt] = [v, i - q * n];
     if (v < min) [min, minAt] = [v, i - q * n];
   }
-  const scale = Math.max(Math.abs(max), Math.abs(min));
-  if (!(scale >= 1e-100)) return;
-  const margin = 1e-9 * scale;
+  const margin = seedMargin(max, min);
+  if (Number.isNaN(margin)) return;
   [tracker.maxValue, tracker.maxX] = [max - margin, x[maxAt]!];
   [tracker.minValue, tracker.minX] = [min + margin, x[minAt]!];
 }

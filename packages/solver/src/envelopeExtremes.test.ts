@@ -98,7 +98,8 @@ describe("interval ranges of the cases", () => {
         seen[2] = Math.min(seen[2]!, parts[5]!);
         seen[3] = Math.max(seen[3]!, parts[4]!);
       }
-      const range = ranges[quantity].subarray(4 * k, 4 * k + 4);
+      // [least, greatest] of D, then of L's negative and positive parts
+      const range = ranges.flatMap((r) => [r[quantity][4 * k]!, r[quantity][4 * k + 1]!]);
       const scale = Math.max(...seen.map(Math.abs));
       seen.forEach((value, i) => {
         const isLeast = i % 2 === 0;
@@ -142,7 +143,8 @@ describe("envelope extremes skipping intervals", () => {
         );
         const analysis = analyze(beamModelSchema.parse(model));
         const context = prepareEnvelopeExtremes(analysis);
-        const unbounded = { ...context, ranges: Object.fromEntries(ENVELOPE_QUANTITIES.map((q) => [q, context.ranges[q].map((_, i) => (i % 2 === 0 ? -Infinity : Infinity))])) } as typeof context;
+        const infinite = (values: Float64Array) => values.map((v, i) => (i % 4 === 0 ? -Infinity : i % 4 === 1 ? Infinity : v));
+        const unbounded = { ...context, ranges: context.ranges.map((r) => ({ V: infinite(r.V), M: infinite(r.M), uy: infinite(r.uy) })) };
         const places = placeStations(analysis.grid, analysis.stations);
         const peaks = new Float64Array(12 * analysis.combinations.length);
         envelopeStationRows(analysis, places, context, peaks);

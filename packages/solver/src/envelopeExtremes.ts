@@ -1,8 +1,8 @@
 import type { Analysis, AnalysisCase } from "./analysisTypes.js";
-import { roundingMargin, type CurveRanges } from "./curveRanges.js";
+import { curveRanges, intervalBound, seedMargin, type CurveRanges } from "./curveRanges.js";
 import { envelopeFactorSets, envelopeOfSets, ENVELOPE_QUANTITIES, evaluateCaseParts, type EnvelopeQuantity, type FactorSet } from "./envelopeQueries.js";
-import { QUANTITY_LAYOUT, type Extreme, type Extremes } from "./fieldQueries.js";
-import { evaluatePolynomial, polynomialRange, signChangesInto, taylorBound } from "./polynomial.js";
+import { ExtremeTracker, QUANTITY_LAYOUT, visitPolynomialExtremes, type Extreme, type Extremes } from "./fieldQueries.js";
+import { evaluatePolynomial, signChangesInto, taylorBound } from "./polynomial.js";
 import { COEFFICIENTS_PER_INTERVAL } from "./segmentField.js";
 
 /**
@@ -32,11 +32,12 @@ export interface EnvelopeExtremesContext {
   /** Case parts (`evaluateCaseParts`) at both ends of every interval: [k][end][3·cases]. */
   ends: Record<EnvelopeQuantity, Float64Array>;
   /**
-   * Per interval and case, [least, greatest] over the interval: of its curve, or for a patterned
-   * case of its negative and positive parts. Summed with a combination's factors they bound its
-   * envelopes on the whole interval, so most intervals are skipped without being split.
+   * Per case, its `curveRanges`; for a patterned case instead the least of its negative part and
+   * the greatest of its positive part per interval (no x). Summed with a combination's factors
+   * (`intervalBound`) they bound its envelopes on a whole interval, so most intervals are skipped
+   * without being split.
    */
-  ranges: Record<EnvelopeQuantity, Float64Array>;
+  ranges: CurveRanges[];
 }
 
 /** `caseRanges` (`curveRanges` of each case's curve) are computed here unless given. */
@@ -57,26 +58,20 @@ export function prepareEnvelopeExtremes(analysis: Analysis, caseRanges?: CurveRa
     }
     ends[quantity] = values;
   }
-  const ranges = {} as EnvelopeExtremesContext["ranges"];
-  const cases = analysis.cases;
-  for (const quantity of ENVELOPE_QUANTITIES) {
-    const { offset, degree } = QUANTITY_LAYOUT[quantity];
-    const values = new Float64Array(2 * (grid.length - 1) * cases.length);
-    for (let k = 0; k + 1 < grid.length; k++) {
-      for (let c = 0; c < cases.length; c++) {
-        const at = 2 * (k * cases.length + c);
-        const split = splits[quantity][c]?.[k];
-        if (split) {
-          values[at] = split.negativeMin;
-          values[at + 1] = split.positiveMax;
-        } else if (caseRanges) {
-          values[at] = caseRanges[c]![quantity][4 * k]!;
-          values[at + 1] = caseRanges[c]![quantity][4 * k + 1]!;
-        } else polynomialRange(cases[c]!.curve.coef, k * COEFFICIENTS_PER_INTERVAL + offset, degree, 0, grid[k + 1]! - grid[k]!, values, at);
-      }
+  const K = grid.length - 1;
+  const ranges = analysis.cases.map((loadCase, c): CurveRanges => {
+    if (!loadCase.pattern) return caseRanges?.[c] ?? curveRanges(grid, loadCase.curve);
+    const parts = {} as CurveRanges;
+    for (const quantity of ENVELOPE_QUANTITIES) {
+      const values = new Float64Array(4 * K).fill(NaN);
+      splits[quantity][c]!.forEach((split, k) => {
+        values[4 * k] = split.negativeMin;
+        values[4 * k + 1] = split.positiveMax;
+      });
+      parts[quantity] = values;
     }
-    ranges[quantity] = values;
-  }
+    return parts;
+  });
   return { analysis, splits, ends, ranges };
 }
 
@@ -166,7 +161,8 @@ function grown(values: Float64Array, size: number): Float64Array<ArrayBuffer> {
   return out;
 }
 
-const rangeOut = new Float64Array(2);
+const partRange = new ExtremeTracker();
+const partScratch = new Float64Array(6);
 
 /**
  * Sets the split's positiveMax and negativeMin. The values at the cuts come first; a sub-interval is
@@ -187,12 +183,14 @@ function setPartRanges(split: PatternSplit, degree: number): void {
     const b = cuts[s + 1]!;
     const o = at + s * n;
     if (taylorBound(positive, o, degree, a, b, true) > max) {
-      polynomialRange(positive, o, degree, a, b, rangeOut, 0);
-      max = Math.max(max, rangeOut[1]!);
+      partRange.reset();
+      visitPolynomialExtremes(positive, o, degree, b, 0, b, partScratch, partRange, a);
+      max = Math.max(max, partRange.maxValue);
     }
     if (taylorBound(negative, o, degree, a, b, false) < min) {
-      polynomialRange(negative, o, degree, a, b, rangeOut, 0);
-      min = Math.min(min, rangeOut[0]!);
+      partRange.reset();
+      visitPolynomialExtremes(negative, o, degree, b, 0, b, partScratch, partRange, a);
+      min = Math.min(min, partRange.minValue);
     }
   }
   split.positiveMax = max;
@@ -287,16 +285,13 @@ export function envelopeExtremesOf(context: EnvelopeExtremesContext, sets: Facto
  * Starts the trackers just below the best sampled values of the same envelope (`peaks`: Vmax, Vmin,
  * Mmax, Mmin, uyMax, uyMin, then their x, as `envelopeStationRows` writes them), so the bounds in
  * `visitFactorSet` skip nearly every sub-interval that cannot hold the extreme. The start sits a
- * hair (1e-9 of the scale) inside the samples, so the exact search always replaces it: the extreme
- * and its x come from the polynomials, never from a sample.
+ * hair inside the samples (`seedMargin`).
  */
 function seedWithSamples(trackers: Record<EnvelopeQuantity, Tracker>, peaks: Float64Array): void {
   ENVELOPE_QUANTITIES.forEach((quantity, q) => {
     const [max, min] = [peaks[2 * q]!, peaks[2 * q + 1]!];
-    if (!(max >= min)) return; // no samples
-    const scale = Math.max(Math.abs(max), Math.abs(min));
-    if (!(scale >= 1e-100)) return; // see roundingMargin
-    const margin = 1e-9 * scale;
+    const margin = seedMargin(max, min);
+    if (Number.isNaN(margin)) return;
     trackers[quantity].max = { value: max - margin, x: peaks[6 + 2 * q]! };
     trackers[quantity].min = { value: min + margin, x: peaks[7 + 2 * q]! };
   });
@@ -343,25 +338,11 @@ function visitFactorSet(context: EnvelopeExtremesContext, factors: FactorSet, qu
     }
   };
   const active = factors.filter((f) => f.factor !== 0);
-  const ranges = context.ranges[quantity];
-  const stride = 2 * analysis.cases.length;
+  const bound = new Float64Array(2);
   for (let k = 0; k + 1 < grid.length; k++) {
-    // The sum of the factored case ranges bounds both envelopes on the whole interval (up to
-    // rounding: `roundingMargin`).
-    let high = 0;
-    let low = 0;
-    let scale = 0;
-    for (let i = 0; i < active.length; i++) {
-      const { caseIndex, factor } = active[i]!;
-      const least = factor * ranges[k * stride + 2 * caseIndex]!;
-      const greatest = factor * ranges[k * stride + 2 * caseIndex + 1]!;
-      high += Math.max(least, greatest);
-      low += Math.min(least, greatest);
-      scale += Math.abs(least) + Math.abs(greatest);
-    }
-    const margin = roundingMargin(scale);
-    const wantUpper = high + margin > tracker.max.value;
-    const wantLower = low - margin < tracker.min.value;
+    intervalBound(active, context.ranges, quantity, k, bound);
+    const wantUpper = bound[0]! > tracker.max.value;
+    const wantLower = bound[1]! < tracker.min.value;
     if (!wantUpper && !wantLower) continue;
     const o = k * COEFFICIENTS_PER_INTERVAL + offset;
     const h = grid[k + 1]! - grid[k]!;

@@ -200,10 +200,10 @@ export function reactionEnvelope(analysis: Analysis, id: string, parts: Float64A
   const sets = envelopeFactorSets(analysis, id);
   if (!sets) return undefined;
   const stride = 3 * analysis.cases.length;
-  const pair = new Float64Array(4);
+  const bounds = new Float64Array(4); // fyMax, fyMin, mzMax, mzMin
   return analysis.supportedNodes.map((node, r) => {
-    envelopeOfSets(sets, parts, 2 * r * stride, pair, 0);
-    envelopeOfSets(sets, parts, (2 * r + 1) * stride, pair, 2);
-    return { node, fyMax: pair[0]!, fyMin: pair[1]!, mzMax: pair[2]!, mzMin: pair[3]! };
+    envelopeOfSets(sets, parts, 2 * r * stride, bounds, 0);
+    envelopeOfSets(sets, parts, (2 * r + 1) * stride, bounds, 2);
+    return { node, fyMax: bounds[0]!, fyMin: bounds[1]!, mzMax: bounds[2]!, mzMin: bounds[3]! };
   });
 }

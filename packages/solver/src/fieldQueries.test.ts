@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import { analyze } from "./analyze.js";
 import { beamModelSchema } from "./beamModelSchema.js";
 import { envelopeAt } from "./envelopeQueries.js";
-import { diagram, extremes, locateInterval, valuesAt } from "./fieldQueries.js";
+import { diagram, extremes, ExtremeTracker, locateInterval, valuesAt, visitPolynomialExtremes } from "./fieldQueries.js";
 
 const E = 2e11;
 const I = 8e-5;
@@ -56,5 +56,21 @@ describe("field queries", () => {
     expect(Math.abs(atMax.V) < 1e-6 || e.Mmax.x === 3).toBe(true);
     const d = diagram(analysis, "C", "M", 64)!;
     expect(e.Mmax.value).toBeGreaterThanOrEqual(Math.max(...d.y) - 1e-9);
+  });
+});
+
+describe("visitPolynomialExtremes on [lo, h]", () => {
+  // Values by hand (common practice): u³ − 3u has its extremes at u = ±1, p(−1) = 2 and p(1) = −2.
+  it.each([
+    { name: "cubic with both extremes inside", coef: [0, -3, 0, 1], lo: -1.5, hi: 1.5, range: [-2, 2] },
+    { name: "cubic whose extremes are its ends", coef: [0, -3, 0, 1], lo: 2, hi: 3, range: [2, 18] },
+    { name: "parabola peaking inside", coef: [0, 4, -1], lo: 0, hi: 3, range: [0, 4] },
+    { name: "line", coef: [1, -2], lo: 0, hi: 2, range: [-3, 1] },
+    { name: "constant", coef: [7], lo: 0, hi: 2, range: [7, 7] },
+  ])("gives the least and greatest value of a $name", ({ coef, lo, hi, range }) => {
+    const tracker = new ExtremeTracker();
+    visitPolynomialExtremes(coef, 0, coef.length - 1, hi, 0, hi, new Float64Array(6), tracker, lo);
+    expect(tracker.minValue).toBeCloseTo(range[0]!, 12);
+    expect(tracker.maxValue).toBeCloseTo(range[1]!, 12);
   });
 });

@@ -147,9 +147,9 @@ export class ExtremeTracker {
 let roots = new Float64Array(8);
 
 /**
- * Visits the values of a polynomial on [0, h] at both ends and at every interior extreme (sign
- * change of its derivative); `scratch` needs length ≥ degree. The right end is reported at x1
- * (the breakpoint itself, free of rounding in x0 + h).
+ * Visits the values of a polynomial of u on [lo, h] (lo = 0 unless given) at both ends and at every
+ * interior extreme (sign change of its derivative), u reported at x0 + u; `scratch` needs length ≥
+ * degree. The right end is reported at x1 (the breakpoint itself, free of rounding in x0 + h).
  */
 export function visitPolynomialExtremes(
   coef: ArrayLike<number>,
@@ -160,11 +160,12 @@ export function visitPolynomialExtremes(
   x1: number,
   scratch: Float64Array,
   tracker: ExtremeTracker,
+  lo = 0,
 ): void {
-  tracker.visit(evaluatePolynomial(coef, offset, degree, 0), x0);
+  tracker.visit(evaluatePolynomial(coef, offset, degree, lo), x0 + lo);
   for (let k = 1; k <= degree; k++) scratch[k - 1] = k * coef[offset + k]!;
   if (roots.length < degree) roots = new Float64Array(degree);
-  const count = signChangesInto(scratch, 0, degree - 1, 0, h, roots);
+  const count = signChangesInto(scratch, 0, degree - 1, lo, h, roots);
   for (let i = 0; i < count; i++) tracker.visit(evaluatePolynomial(coef, offset, degree, roots[i]!), x0 + roots[i]!);
   tracker.visit(evaluatePolynomial(coef, offset, degree, h), x1);
 }

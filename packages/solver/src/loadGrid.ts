@@ -1,4 +1,5 @@
 import type { BeamModel, Load } from "./beamModelSchema.js";
+import { viewsOf } from "./workBuffers.js";
 
 /** A stretch between consecutive supported nodes (or an overhang), for pattern loading. */
 export interface Span {
@@ -124,25 +125,6 @@ export function spanOf(spans: readonly Span[], x: number): number {
 function emptyBasis(grid: LoadGrid, caseIndex: number, span: number, take: (length: number) => Float64Array): BasisLoads {
   const K = grid.x.length - 1;
   return { caseIndex, span, q0: take(K), q1: take(K), fy: take(K + 1), mz: take(K + 1), settlements: [] };
-}
-
-/**
- * Zeroed views of shared buffers, allocated when first needed, `chunk` numbers each: a small typed
- * array of its own costs an allocation outside the heap (microseconds each, hundreds per solve),
- * a view of a shared one not.
- */
-export function viewsOf(chunk: number): (length: number) => Float64Array {
-  let buffer = new Float64Array(0);
-  let used = 0;
-  return (length) => {
-    if (used + length > buffer.length) {
-      buffer = new Float64Array(Math.max(chunk, length));
-      used = 0;
-    }
-    const view = buffer.subarray(used, used + length);
-    used += length;
-    return view;
-  };
 }
 
 /**

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { evaluatePolynomial, polynomialRange, signChangesInto, taylorBound } from "./polynomial.js";
+import { evaluatePolynomial, signChangesInto, taylorBound } from "./polynomial.js";
 
 /** The roots signChangesInto writes, as an array. */
 function findSignChanges(coef: number[], offset: number, degree: number, lo: number, hi: number): number[] {
@@ -43,22 +43,6 @@ describe("findSignChanges", () => {
     // (u+2)(u+1)u(u-1)(u-2) = u^5 - 5u^3 + 4u
     const found = findSignChanges([0, 4, 0, -5, 0, 1], 0, 5, -2.5, 2.5);
     expect(found.map((r) => Math.round(r * 1e9) / 1e9)).toEqual([-2, -1, 0, 1, 2]);
-  });
-});
-
-describe("polynomialRange", () => {
-  // Values by hand (common practice): u³ − 3u has its extremes at u = ±1, p(−1) = 2 and p(1) = −2.
-  it.each([
-    { name: "cubic with both extremes inside", coef: [0, -3, 0, 1], lo: -1.5, hi: 1.5, range: [-2, 2] },
-    { name: "cubic whose extremes are its ends", coef: [0, -3, 0, 1], lo: 2, hi: 3, range: [2, 18] },
-    { name: "parabola peaking inside", coef: [0, 4, -1], lo: 0, hi: 3, range: [0, 4] },
-    { name: "line", coef: [1, -2], lo: 0, hi: 2, range: [-3, 1] },
-    { name: "constant", coef: [7], lo: 0, hi: 2, range: [7, 7] },
-  ])("gives the least and greatest value of a $name", ({ coef, lo, hi, range }) => {
-    const out = new Float64Array(3);
-    polynomialRange(coef, 0, coef.length - 1, lo, hi, out, 1);
-    expect(out[1]).toBeCloseTo(range[0]!, 12);
-    expect(out[2]).toBeCloseTo(range[1]!, 12);
   });
 });
 

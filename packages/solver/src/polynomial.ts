@@ -118,31 +118,3 @@ export function taylorBound(coef: ArrayLike<number>, offset: number, degree: num
   }
   return bound;
 }
-
-const rangeDerivatives: Float64Array[] = [];
-const rangeRoots: Float64Array[] = [];
-
-/**
- * The least and greatest values of the polynomial on [lo, hi], written to out[at] and out[at + 1]:
- * each at an end or at an interior sign change of the derivative. Allocates nothing.
- */
-export function polynomialRange(coef: ArrayLike<number>, offset: number, degree: number, lo: number, hi: number, out: Float64Array, at: number): void {
-  let min = evaluatePolynomial(coef, offset, degree, lo);
-  let max = min;
-  const end = evaluatePolynomial(coef, offset, degree, hi);
-  if (end < min) min = end;
-  if (end > max) max = end;
-  if (degree >= 2) {
-    const derivative = (rangeDerivatives[degree] ??= new Float64Array(degree));
-    const roots = (rangeRoots[degree] ??= new Float64Array(degree));
-    differentiate(coef, offset, degree, derivative);
-    const count = signChangesInto(derivative, 0, degree - 1, lo, hi, roots);
-    for (let i = 0; i < count; i++) {
-      const v = evaluatePolynomial(coef, offset, degree, roots[i]!);
-      if (v < min) min = v;
-      if (v > max) max = v;
-    }
-  }
-  out[at] = min;
-  out[at + 1] = max;
-}

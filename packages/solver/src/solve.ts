@@ -5,8 +5,9 @@ import { envelopeFactorSets, reactionEnvelope, reactionParts, type ReactionEnvel
 import { unwrap } from "./errors.js";
 import { combinationExtremes, curveRanges, extremesOfRanges, type CurveRanges } from "./curveRanges.js";
 import type { Extremes } from "./fieldQueries.js";
-import { curveStationRows, envelopeStationRows, placeStations, stationValues, workArray, type EnvelopeStationRow, type StationPlaces, type StationRow } from "./stationRows.js";
+import { curveStationRows, envelopeStationRows, placeStations, stationValues, type EnvelopeStationRow, type StationPlaces, type StationRow } from "./stationRows.js";
 import { validateModel } from "./validateModel.js";
+import { workArray } from "./workBuffers.js";
 
 export type { EnvelopeStationRow, StationRow } from "./stationRows.js";
 

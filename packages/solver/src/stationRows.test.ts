@@ -3,7 +3,7 @@ import { analyze } from "./analyze.js";
 import { beamModelSchema } from "./beamModelSchema.js";
 import { envelopeAt } from "./envelopeQueries.js";
 import { locateInterval, valuesAt } from "./fieldQueries.js";
-import { curveStationRows, envelopeStationRows, placeStations, workArray } from "./stationRows.js";
+import { curveStationRows, envelopeStationRows, placeStations } from "./stationRows.js";
 
 const E = 2e11;
 const I = 8e-5;
@@ -74,17 +74,5 @@ describe("station rows", () => {
     const row = curveStationRows(places, analysis.cases[0]!.curve)[1]!;
     expect(Object.keys(row)).toEqual(["x", "V", "M", "uy", "rz"]);
     expect(structuredClone(row)).toEqual(JSON.parse(JSON.stringify(row)));
-  });
-});
-
-describe("workArray", () => {
-  it("hands the same array out again up to 1 M numbers, and never keeps a larger one", () => {
-    const kept = { array: new Float64Array(0) };
-    const first = workArray(1000, kept);
-    expect(first.length).toBe(1000);
-    expect(workArray(500, kept)).toBe(first);
-    const large = workArray((1 << 20) + 1, kept);
-    expect(large.length).toBe((1 << 20) + 1);
-    expect(kept.array).toBe(first);
   });
 });

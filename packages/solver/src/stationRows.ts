@@ -2,6 +2,7 @@ import type { Analysis, Curve } from "./analysisTypes.js";
 import { locateInterval } from "./fieldQueries.js";
 import { prepareEnvelopeExtremes, type EnvelopeExtremesContext, type PatternSplit } from "./envelopeExtremes.js";
 import { COEFFICIENTS_PER_INTERVAL, M_OFFSET, RZ_OFFSET, UY_OFFSET, V_OFFSET } from "./segmentField.js";
+import { workArray } from "./workBuffers.js";
 
 export interface StationRow {
   x: number;
@@ -72,7 +73,8 @@ class Row implements StationRow {
   ) {}
 }
 
-class EnvelopeRow implements EnvelopeStationRow {
+/** Exported for the benchmark's floor figure only (bench/bench.ts); not part of the package API. */
+export class EnvelopeRow implements EnvelopeStationRow {
   constructor(
     public x: number,
     public Mmax: number,
@@ -117,20 +119,6 @@ export function curveStationRows(places: StationPlaces, curve: Curve, values: Fl
   const rows: StationRow[] = new Array(n);
   for (let i = 0; i < n; i++) rows[i] = new Row(x[i]!, values[i]!, values[n + i]!, values[2 * n + i]!, values[3 * n + i]!);
   return rows;
-}
-
-/**
- * A work array of at least `size` numbers (contents undefined). Up to 1 M numbers (8 MB) it is kept
- * and handed out again on the next call: a large typed array per call was slow to allocate, and the
- * memory it counted outside the heap brought on full garbage collections. Larger ones are not
- * kept, so a long-lived solver thread does not hold on to one huge model's memory. Callers must
- * not keep it past their return, nor call `workArray` again while using it (one at a time).
- */
-export function workArray(size: number, kept: { array: Float64Array<ArrayBuffer> }): Float64Array<ArrayBuffer> {
-  if (kept.array.length >= size) return kept.array;
-  const array = new Float64Array(size);
-  if (size <= 1 << 20) kept.array = array;
-  return array;
 }
 
 const columns = { array: new Float64Array(0) };
